@@ -1,0 +1,72 @@
+// Candidate paradigms for a lemma: those whose lemma pattern fits it, with the shared ranking features.
+import { matchStems, type Paradigm, stemFit } from './paradigm.ts'
+import { SuffixIndex } from './suffix-index.ts'
+
+/** One applicable paradigm for a lemma. */
+export interface Candidate {
+  paradigm: number
+  stems: string[]
+  shared: string[]
+}
+
+/** Paradigms of one book, indexed for fast candidate search and analogy features. */
+export class CandidateFinder {
+  private readonly byUpos = new Map<string, number[]>()
+  private readonly suffixes: SuffixIndex[]
+
+  constructor(
+    readonly paradigms: readonly Paradigm[],
+    memberLemmas: readonly string[][],
+  ) {
+    paradigms.forEach((p, i) => {
+      const list = this.byUpos.get(p.upos) ?? []
+      list.push(i)
+      this.byUpos.set(p.upos, list)
+    })
+    this.suffixes = paradigms.map((_, i) => {
+      const idx = new SuffixIndex()
+      for (const m of memberLemmas[i] ?? []) idx.add(m.toLowerCase())
+      return idx
+    })
+  }
+
+  /** UPOS tags that have paradigms. */
+  uposTags(): string[] {
+    return [...this.byUpos.keys()]
+  }
+
+  /**
+   * The paradigms that apply to a lemma. `memberOf` names the paradigm the lemma itself belongs to when it is
+   * a training table, so its own letters are left out of the analogy features (leave-one-out).
+   * @example finder.find('Mantel', 'NOUN').map((c) => c.paradigm) // [0, 3, 8]
+   */
+  find(lemma: string, upos: string, memberOf = -1): Candidate[] {
+    const out: Candidate[] = []
+    const lower = lemma.toLowerCase()
+    for (const i of this.byUpos.get(upos) ?? []) {
+      const p = this.paradigms[i]!
+      const last = p.lemma[p.lemma.length - 1]
+      if (typeof last === 'string' && !lemma.endsWith(last)) continue
+      const first = p.lemma[0]
+      if (typeof first === 'string' && !lemma.startsWith(first)) continue
+      const stems = matchStems(p, lemma)
+      if (!stems) continue
+      out.push({ paradigm: i, stems, shared: this.sharedFeatures(i, p, lower, stems, memberOf === i) })
+    }
+    return out
+  }
+
+  private sharedFeatures(i: number, p: Paradigm, lower: string, stems: string[], self: boolean): string[] {
+    const { length, count, wholeMember } = this.suffixes[i]!.longestShared(lower, self)
+    const len = Math.min(length, 8)
+    const bucket = count >= 10 ? 'many' : count >= 3 ? 'some' : String(count)
+    const members = p.members - (self ? 1 : 0)
+    const vars = stems.length - (p.openPrefix ? 1 : 0)
+    const deficit = Math.min(6, 6 * vars - stemFit(stems, p.shapes))
+    const f = [`sfx:${len}`, `sfxc:${len}:${bucket}`, `size:${Math.floor(Math.log2(members + 1))}`, `fit:${deficit}`]
+    if (wholeMember) f.push('whole')
+    if (p.openPrefix) f.push(`open:${stems[0] ? 'used' : 'empty'}`)
+    if (members <= 0) f.push('orphan')
+    return f
+  }
+}

@@ -1,0 +1,60 @@
+// Learning: lexicon → paradigm book → ranker that assigns paradigms to lemmas from their shape.
+import type { Entry } from '../lexicon/entry.ts'
+import { buildLexicon, type Lexicon } from '../lexicon/lexicon.ts'
+import { CandidateFinder } from './candidates.ts'
+import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
+import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
+import { DEFAULT_RANKER_OPTIONS, type RankerExample, type RankerOptions, type RankerWeights, trainRanker } from './ranker.ts'
+
+export interface LearnOptions {
+  features: FeatureOptions
+  ranker: RankerOptions
+}
+
+export const DEFAULT_LEARN_OPTIONS: LearnOptions = { features: DEFAULT_FEATURE_OPTIONS, ranker: DEFAULT_RANKER_OPTIONS }
+
+/** What learning produces: the lexicon, its paradigm book, and the weights that choose among paradigms. */
+export interface InflectionModel {
+  lexicon: Lexicon
+  book: ParadigmBook
+  weights: RankerWeights
+  finder: CandidateFinder
+  options: LearnOptions
+}
+
+/**
+ * Learn paradigms from the tables of a lexicon and train the paradigm ranker.
+ * @example learnInflection(entries).book.paradigms.length // 136
+ */
+export function learnInflection(entries: Iterable<Entry>, options: LearnOptions = DEFAULT_LEARN_OPTIONS): InflectionModel {
+  const lexicon = buildLexicon(entries)
+  return learnFromLexicon(lexicon, options)
+}
+
+/** As learnInflection, from a lexicon already built. */
+export function learnFromLexicon(lexicon: Lexicon, options: LearnOptions = DEFAULT_LEARN_OPTIONS): InflectionModel {
+  const book = extractParadigms(lexicon)
+  const members: string[][] = book.paradigms.map(() => [])
+  book.memberOf.forEach((p, i) => {
+    if (p >= 0) members[p]!.push(lexicon.entries[i]!.lemma)
+  })
+  const finder = new CandidateFinder(book.paradigms, members)
+  const examples: RankerExample[] = []
+  lexicon.entries.forEach((e, i) => {
+    if (!e.cells) return
+    const own = book.memberOf[i]!
+    const found = finder.find(e.lemma, e.upos, own)
+    const gold: number[] = []
+    found.forEach((c, k) => {
+      if (c.paradigm === own || reproduces(book.paradigms[c.paradigm]!, e)) gold.push(k)
+    })
+    examples.push({
+      local: lemmaFeatures(e.lemma, e.inherent, options.features),
+      candidates: found.map((c) => c.paradigm),
+      shared: found.map((c) => c.shared),
+      gold,
+    })
+  })
+  const weights = trainRanker(examples, options.ranker)
+  return { lexicon, book, weights, finder, options }
+}

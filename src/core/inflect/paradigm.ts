@@ -1,0 +1,128 @@
+// A paradigm: an abstract table (a pattern per cell over stem variables) and how to apply it to a lemma.
+import { fillPattern, type Pattern, patternKey, showPattern } from './pattern.ts'
+
+/** One cell of a paradigm: its FEATS and the pattern of each variant form. */
+export interface ParadigmCell {
+  key: string
+  forms: Pattern[]
+}
+
+/**
+ * An abstract table shared by many lemmas.
+ * @example { id: 'NOUN-1', upos: 'NOUN', lemma: [0], openPrefix: false, cells: [...], members: 412, examples: ['Tag'] }
+ */
+export interface Paradigm {
+  id: string
+  upos: string
+  lemma: Pattern
+  openPrefix: boolean
+  cells: ParadigmCell[]
+  /** Tables of the lexicon that follow it (defective ones included). */
+  members: number
+  /** Member lemmas, most typical first (a few). */
+  examples: string[]
+  /** Per stem variable, what the members had there. */
+  shapes?: StemShape[]
+}
+
+/** The stable text identity of a paradigm's shape (cells sorted by key, variants sorted). */
+export function paradigmShapeKey(upos: string, lemma: Pattern, openPrefix: boolean, cells: ParadigmCell[]): string {
+  const cellPart = [...cells]
+    .sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0))
+    .map((c) => `${c.key}=${c.forms.map(patternKey).sort().join('\u0003')}`)
+    .join('\u0004')
+  return `${upos}\u0005${openPrefix ? 1 : 0}\u0005${patternKey(lemma)}\u0005${cellPart}`
+}
+
+/** What the members of a paradigm had in each stem variable: used to choose among several ways to match. */
+export interface StemShape {
+  /** Contents seen (a bounded sample, most frequent first). */
+  seen: string[]
+  first: string
+  last: string
+  minLength: number
+  maxLength: number
+}
+
+const MAX_MATCHES = 64
+
+/**
+ * Every way a lemma fits a lemma pattern (stem variables non-empty, an open prefix may be empty), greedy first.
+ * @example matchAll([0, 'a', 1], false, 'Kanal') // [['Kan', 'l'], ['K', 'nal']]
+ */
+export function matchAll(lemma: Pattern, openPrefix: boolean, word: string): string[][] {
+  const out: string[][] = []
+  const stems: string[] = []
+  const chars = [...word]
+  const step = (part: number, pos: number): void => {
+    if (out.length >= MAX_MATCHES) return
+    if (part === lemma.length) {
+      if (pos === chars.length) out.push([...stems])
+      return
+    }
+    const p = lemma[part]!
+    if (typeof p === 'string') {
+      const lit = [...p]
+      for (let k = 0; k < lit.length; k++) if (chars[pos + k] !== lit[k]) return
+      step(part + 1, pos + lit.length)
+      return
+    }
+    const min = p === 0 && openPrefix ? 0 : 1
+    for (let end = chars.length; end >= pos + min; end--) {
+      stems[p] = chars.slice(pos, end).join('')
+      step(part + 1, end)
+    }
+  }
+  step(0, 0)
+  return out
+}
+
+/** How well stem contents fit what the paradigm's members had (higher is better). */
+export function stemFit(stems: readonly string[], shapes: readonly StemShape[] | undefined): number {
+  if (!shapes) return 0
+  let fit = 0
+  for (let i = 0; i < stems.length; i++) {
+    const s = stems[i]!
+    const sh = shapes[i]
+    if (!sh) continue
+    if (sh.seen.includes(s)) fit += 3
+    if (s.length >= sh.minLength && s.length <= sh.maxLength) fit += 1
+    if (s && sh.first.includes(s[0]!)) fit += 1
+    if (s && sh.last.includes(s[s.length - 1]!)) fit += 1
+  }
+  return fit
+}
+
+/** The stem contents of a lemma under a paradigm (the best-fitting match), or null when it does not apply. */
+export function matchStems(p: Pick<Paradigm, 'lemma' | 'openPrefix' | 'shapes'>, lemma: string): string[] | null {
+  const all = matchAll(p.lemma, p.openPrefix, lemma)
+  if (all.length <= 1) return all[0] ?? null
+  let best = all[0]!
+  let bestFit = stemFit(best, p.shapes)
+  for (let i = 1; i < all.length; i++) {
+    const f = stemFit(all[i]!, p.shapes)
+    if (f > bestFit) {
+      best = all[i]!
+      bestFit = f
+    }
+  }
+  return best
+}
+
+/**
+ * Apply a paradigm to a lemma: the forms of each cell, or null when it does not apply.
+ * @example applyParadigm(p, 'Mantel') // [['Mantel'], ['Mantels'], ['Mäntel'], ...]
+ */
+export function applyParadigm(
+  p: Pick<Paradigm, 'lemma' | 'openPrefix' | 'cells' | 'shapes'>,
+  lemma: string,
+): string[][] | null {
+  const stems = matchStems(p, lemma)
+  if (!stems) return null
+  return p.cells.map((c) => c.forms.map((f) => fillPattern(f, stems)))
+}
+
+/** A readable description of each cell's rule, for the paradigm book. */
+export function describeParadigm(p: Paradigm): { lemma: string; cells: { feats: string; rule: string[] }[] } {
+  return { lemma: showPattern(p.lemma), cells: p.cells.map((c) => ({ feats: c.key, rule: c.forms.map(showPattern) })) }
+}
