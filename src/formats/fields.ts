@@ -1,0 +1,67 @@
+// Field checks shared by the lexicon formats: non-empty words, UPOS tags, canonical FEATS.
+import { canonicalizeFeats, isUpos } from '../core/lexicon/feats.ts'
+import type { Problem, ProblemCode } from '../core/lexicon/problem.ts'
+
+/** Where a line came from. */
+export interface Where {
+  file: string
+  line: number
+}
+
+/** What a line parser returns: a record, a problem, or `null` for a line with no data (blank, comment). */
+export type LineResult<T> = { value: T; languageSpecific?: string[] } | { problem: Problem } | null
+
+/** A parser of one line of a line-based format. */
+export type LineParser<T> = (text: string, at: Where) => LineResult<T>
+
+/**
+ * A problem located at a line.
+ * @example problemAt('bad-upos', 'unknown UPOS "NN"', { file: 'a.tsv', line: 3 })
+ */
+export function problemAt(code: ProblemCode, message: string, at: Where): Problem {
+  return { code, message, file: at.file, line: at.line }
+}
+
+// biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is its purpose
+const CONTROL_OR_TAB = /[\u0000-\u001F\u007F]/
+const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/
+
+/**
+ * Check a lemma or form: not blank, and (for values decoded from JSON escapes) no control characters,
+ * tabs or lone surrogates, which no TSV line could carry. Returns the NFC value or a problem.
+ * @example checkWord('ha\u0308us', 'lemma', at) // { value: 'häus' }
+ */
+export function checkWord(value: string, field: string, at: Where): { value: string } | { problem: Problem } {
+  if (value.trim() === '') return { problem: problemAt('empty-field', `${field} is empty`, at) }
+  if (CONTROL_OR_TAB.test(value)) {
+    return {
+      problem: problemAt('control-char', `${field} "${value}" contains a tab or control character`, at),
+    }
+  }
+  if (LONE_SURROGATE.test(value)) {
+    return { problem: problemAt('bad-utf8', `${field} contains a lone surrogate`, at) }
+  }
+  return { value: value.normalize('NFC') }
+}
+
+/**
+ * Check a UPOS tag against the 17 universal tags.
+ * @example checkUpos('NN', at) // problem 'bad-upos'
+ */
+export function checkUpos(upos: string, at: Where): Problem | undefined {
+  if (isUpos(upos)) return undefined
+  return problemAt('bad-upos', `unknown UPOS "${upos}" (expected one of the 17 UD tags, e.g. NOUN)`, at)
+}
+
+/**
+ * Canonicalize a FEATS bundle, locating any problem at the line.
+ * @example checkFeats('Number=Sing|Case=Nom', at) // { feats: 'Case=Nom|Number=Sing', languageSpecific: [] }
+ */
+export function checkFeats(
+  raw: string,
+  at: Where,
+): { feats: string; languageSpecific: string[] } | { problem: Problem } {
+  const result = canonicalizeFeats(raw)
+  if (!result.ok) return { problem: { ...result.problem, file: at.file, line: at.line } }
+  return { feats: result.feats, languageSpecific: result.languageSpecific }
+}
