@@ -9,7 +9,7 @@ export const MAX_LINE_CHARS = 64 * 1024
 /** A line of input: its NFC text, or the problem that made it unreadable. Exactly one per input line. */
 export type LineItem =
   | { line: number; text: string; problem?: undefined }
-  | { line: number; problem: Problem }
+  | { line: number; problem: Problem; text?: undefined }
 
 export interface LineOptions {
   /** Name used in problems (a path or an upload name). */
