@@ -1,0 +1,49 @@
+// The service's limits: every bound a request can hit, as named constants (documented in the README).
+
+/** Largest JSON request body (analyze batches, expansion lists), in bytes. Beyond: 413. */
+export const MAX_BODY_BYTES = 1024 * 1024
+
+/** Largest corpus accepted by `POST /v1/constraints`, in bytes. Larger corpora: `formfold constrain`. */
+export const MAX_CORPUS_BYTES = 2 * 1024 * 1024
+
+/** Largest model file accepted by a write, in bytes. Larger models: `formfold publish` to local storage. */
+export const MAX_MODEL_BYTES = 32 * 1024 * 1024
+
+/** Forms in one `POST /v1/analyze` batch. */
+export const MAX_BATCH_FORMS = 1000
+
+/** Longest form, in UTF-16 code units (a token longer than this is not a word form). */
+export const MAX_FORM_CHARS = 256
+
+/** Lemmas in one `POST /v1/expand` request. Larger lists: `formfold expand`, which streams from a file. */
+export const MAX_EXPAND_LEMMAS = 10_000
+
+/** Alternative tables a lemma query may ask for. */
+export const MAX_ALTERNATIVES = 5
+
+/** Candidates per form a query may ask for (`top`). */
+export const MAX_TOP = 50
+
+/** Longest model name; names are lowercase letters, digits, `.`, `_`, `-`. */
+export const MAX_MODEL_NAME_CHARS = 64
+
+/** How long an isolate trusts the pointer it read before reading it again, in milliseconds. */
+export const POINTER_TTL_MS = 5_000
+
+/** Decoded models kept per isolate (least recently used evicted first). */
+export const MAX_CACHED_MODELS = 8
+
+/**
+ * All limits by name, for `/health` and the docs.
+ * @example LIMITS.maxBatchForms // 1000
+ */
+export const LIMITS = {
+  maxBodyBytes: MAX_BODY_BYTES,
+  maxCorpusBytes: MAX_CORPUS_BYTES,
+  maxModelBytes: MAX_MODEL_BYTES,
+  maxBatchForms: MAX_BATCH_FORMS,
+  maxFormChars: MAX_FORM_CHARS,
+  maxExpandLemmas: MAX_EXPAND_LEMMAS,
+  maxAlternatives: MAX_ALTERNATIVES,
+  maxTop: MAX_TOP,
+} as const
