@@ -7,6 +7,8 @@ export interface Candidate {
   paradigm: number
   stems: string[]
   shared: string[]
+  /** Length of the longest word-final string shared with a member. */
+  sfx: number
 }
 
 /** Paradigms of one book, indexed for fast candidate search and analogy features. */
@@ -51,13 +53,29 @@ export class CandidateFinder {
       if (typeof first === 'string' && !lemma.startsWith(first)) continue
       const stems = matchStems(p, lemma)
       if (!stems) continue
-      out.push({ paradigm: i, stems, shared: this.sharedFeatures(i, p, lower, stems, memberOf === i) })
+      const sfx = this.suffixes[i]!.longestShared(lower, memberOf === i)
+      out.push({ paradigm: i, stems, shared: this.sharedFeatures(p, sfx, stems, memberOf === i), sfx: sfx.length })
+    }
+    // Relative analogy: how this paradigm's longest shared suffix compares with the best candidate's.
+    let best = 0
+    let second = 0
+    for (const c of out) {
+      if (c.sfx > best) [best, second] = [c.sfx, best]
+      else if (c.sfx > second) second = c.sfx
+    }
+    for (const c of out) {
+      const gap = Math.max(-4, Math.min(4, c.sfx - (c.sfx === best ? second : best)))
+      c.shared.push(`rel:${gap}`, `rel:${gap}:${Math.min(c.sfx, 8)}`)
     }
     return out
   }
 
-  private sharedFeatures(i: number, p: Paradigm, lower: string, stems: string[], self: boolean): string[] {
-    const { length, count, wholeMember } = this.suffixes[i]!.longestShared(lower, self)
+  private sharedFeatures(
+    p: Paradigm,
+    { length, count, wholeMember }: { length: number; count: number; wholeMember: boolean },
+    stems: string[],
+    self: boolean,
+  ): string[] {
     const len = Math.min(length, 8)
     const bucket = count >= 10 ? 'many' : count >= 3 ? 'some' : String(count)
     const members = p.members - (self ? 1 : 0)

@@ -129,7 +129,8 @@ function fullInventories(lex: Lexicon): Map<string, string[]> {
   return out
 }
 
-function stemShapes(stems: string[][]): StemShape[] {
+/** Summaries of what the members had in each stem variable. */
+export function stemShapes(stems: string[][]): StemShape[] {
   const nvars = stems[0]?.length ?? 0
   const shapes: StemShape[] = []
   for (let v = 0; v < nvars; v++) {

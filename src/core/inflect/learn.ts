@@ -2,16 +2,33 @@
 import type { Entry } from '../lexicon/entry.ts'
 import { buildLexicon, type Lexicon } from '../lexicon/lexicon.ts'
 import { CandidateFinder } from './candidates.ts'
+import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
 import { DEFAULT_RANKER_OPTIONS, type RankerExample, type RankerOptions, type RankerWeights, trainRanker } from './ranker.ts'
 
+/** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
+export interface CombineOptions {
+  /** Weight of the per-cell log-probabilities, summed over cells and divided by the cell count. */
+  cellWeight: number
+  /** Floor probabilities, so one unseen choice does not veto a table. */
+  tableFloor: number
+  cellFloor: number
+  /** The cell sum is divided by (cells ** meanPower): 1 is a mean, 0 a plain sum. */
+  meanPower: number
+}
+
 export interface LearnOptions {
   features: FeatureOptions
   ranker: RankerOptions
+  combine: CombineOptions
 }
 
-export const DEFAULT_LEARN_OPTIONS: LearnOptions = { features: DEFAULT_FEATURE_OPTIONS, ranker: DEFAULT_RANKER_OPTIONS }
+export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
+  features: DEFAULT_FEATURE_OPTIONS,
+  ranker: DEFAULT_RANKER_OPTIONS,
+  combine: { cellWeight: 10, tableFloor: 0.001, cellFloor: 0.001, meanPower: 1 },
+}
 
 /** What learning produces: the lexicon, its paradigm book, and the weights that choose among paradigms. */
 export interface InflectionModel {
@@ -19,6 +36,8 @@ export interface InflectionModel {
   book: ParadigmBook
   weights: RankerWeights
   finder: CandidateFinder
+  /** One rule ranker per (UPOS, cell). */
+  cells: CellRuleModel[]
   options: LearnOptions
 }
 
@@ -56,5 +75,6 @@ export function learnFromLexicon(lexicon: Lexicon, options: LearnOptions = DEFAU
     })
   })
   const weights = trainRanker(examples, options.ranker)
-  return { lexicon, book, weights, finder, options }
+  const cells = options.combine.cellWeight > 0 ? learnCellRules(lexicon, options.features, options.ranker) : []
+  return { lexicon, book, weights, finder, cells, options }
 }

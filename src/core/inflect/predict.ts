@@ -1,4 +1,5 @@
 // Prediction: the ranked candidate tables of a lemma, and its expanded table with a score per cell.
+import { cellFormDistribution } from './cell-rules.ts'
 import { lemmaFeatures } from './features.ts'
 import type { InflectionModel } from './learn.ts'
 import { fillPattern } from './pattern.ts'
@@ -8,6 +9,8 @@ import { scoreCandidates } from './ranker.ts'
 export interface PredictedTable {
   paradigm: string
   score: number
+  /** True for the table composed cell by cell (no single paradigm gives it; `paradigm` is the nearest). */
+  composed?: boolean
   cells: { key: string; forms: string[] }[]
 }
 
@@ -42,11 +45,58 @@ export function predictTables(model: InflectionModel, lemma: string, upos: strin
       }
     }
   })
-  const ranked = [...tables.values()].map((t) => t.table)
+  let ranked = [...tables.values()].map((t) => t.table)
   const z = ranked.reduce((a, t) => a + t.score, 0)
   for (const t of ranked) t.score = z > 0 ? t.score / z : 0
+  if (model.cells.length > 0 && model.options.combine.cellWeight > 0) ranked = combineWithCells(model, lemma, upos, inherent, ranked)
   ranked.sort((a, b) => b.score - a.score || (a.paradigm < b.paradigm ? -1 : 1))
   return ranked.slice(0, limit)
+}
+
+/**
+ * Rescore the whole-table candidates with the per-cell rule rankers (a product of experts), and add the
+ * table made of each cell's most probable form, which may combine choices no single training table had.
+ */
+function combineWithCells(model: InflectionModel, lemma: string, upos: string, inherent: string, tables: PredictedTable[]): PredictedTable[] {
+  const { cellWeight, tableFloor, cellFloor } = model.options.combine
+  const dists = new Map<string, Map<string, number>>()
+  for (const m of model.cells) {
+    if (m.upos !== upos) continue
+    const d = cellFormDistribution(m, lemma, inherent, model.options.features)
+    if (d.size > 0) dists.set(m.key, d)
+  }
+  if (dists.size === 0) return tables
+  const cellOrder = model.lexicon.cellKeys[upos] ?? []
+  const composed: PredictedTable = {
+    paradigm: tables[0]?.paradigm ?? '',
+    score: 0,
+    composed: true,
+    cells: cellOrder.filter((k) => dists.has(k)).map((key) => ({ key, forms: [argmax(dists.get(key)!)] })),
+  }
+  const sig = (t: PredictedTable) => t.cells.map((c) => `${c.key}=${c.forms[0]}`).join('\n')
+  const all = tables.some((t) => sig(t) === sig(composed)) ? tables : [...tables, composed]
+  const logits = all.map((t) => {
+    let sum = 0
+    let n = 0
+    for (const c of t.cells) {
+      const d = dists.get(c.key)
+      if (!d) continue
+      sum += Math.log((d.get(c.forms[0]!) ?? 0) + cellFloor)
+      n++
+    }
+    return Math.log(Math.max(t.score, tableFloor)) + (n > 0 ? (cellWeight * sum) / n ** model.options.combine.meanPower : 0)
+  })
+  const max = Math.max(...logits)
+  const e = logits.map((x) => Math.exp(x - max))
+  const zz = e.reduce((a, b) => a + b, 0)
+  return all.map((t, i) => ({ ...t, score: e[i]! / zz }))
+}
+
+function argmax(d: Map<string, number>): string {
+  let best = ''
+  let bp = -1
+  for (const [f, p] of d) if (p > bp || (p === bp && f < best)) [best, bp] = [f, p]
+  return best
 }
 
 /** A cell's forms with the probability that each is right (summed over the candidate tables). */

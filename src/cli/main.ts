@@ -1,0 +1,18 @@
+// The formfold command line: one subcommand per file, each a thin wrapper over a core function.
+import { Command } from 'commander'
+import { registerEvaluate } from './evaluate-command.ts'
+import { registerExpand } from './expand-command.ts'
+import { registerLearn } from './learn-command.ts'
+
+const program = new Command('formfold')
+  .description('Learn inflection paradigms from dictionary tables; predict tables; write tagging constraints.')
+  .showHelpAfterError()
+  .exitOverride((err) => {
+    process.exit(err.exitCode === 0 ? 0 : 2)
+  })
+
+registerLearn(program)
+registerExpand(program)
+registerEvaluate(program)
+
+await program.parseAsync(process.argv)

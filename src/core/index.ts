@@ -1,0 +1,13 @@
+// The public surface of the pure core.
+export * from './lexicon/problem.ts'
+export * from './lexicon/ud.ts'
+export * from './lexicon/feats.ts'
+export * from './lexicon/entry.ts'
+export * from './lexicon/lexicon.ts'
+export * from './inflect/pattern.ts'
+export * from './inflect/paradigm.ts'
+export * from './inflect/extract.ts'
+export * from './inflect/learn.ts'
+export * from './inflect/predict.ts'
+export * from './inflect/expand.ts'
+export * from './evaluate/evaluate.ts'

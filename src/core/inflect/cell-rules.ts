@@ -1,0 +1,82 @@
+// Cell rules: for one cell, the lemma → form rewrite of every training table, grouped, and a ranker over them.
+// Factoring a table into its cells lets a lemma combine choices seen in different tables (a prefix from one
+// class, a stem change from another), as in the aligned edit rules of Durrett & DeNero (2013), NAACL.
+import type { Lexicon } from '../lexicon/lexicon.ts'
+import { CandidateFinder } from './candidates.ts'
+import { stemShapes } from './extract.ts'
+import { lemmaFeatures, type FeatureOptions } from './features.ts'
+import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
+import { extractPattern, fillPattern } from './pattern.ts'
+import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates, trainRanker } from './ranker.ts'
+
+/** The rules of one cell of one UPOS, with the weights that choose among them. */
+export interface CellRuleModel {
+  upos: string
+  key: string
+  rules: Paradigm[]
+  weights: RankerWeights
+  finder: CandidateFinder
+}
+
+/**
+ * Learn one rule model per (UPOS, cell) from the lexicon's tables.
+ * @example learnCellRules(lexicon, features, ranker).length // 27 for German verbs
+ */
+export function learnCellRules(lex: Lexicon, features: FeatureOptions, ranker: RankerOptions): CellRuleModel[] {
+  const out: CellRuleModel[] = []
+  for (const [upos, keys] of Object.entries(lex.cellKeys)) {
+    const tables = lex.entries.filter((e) => e.upos === upos && e.cells)
+    for (const key of keys) {
+      const groups = new Map<string, { rule: Paradigm; lemmas: string[]; stems: string[][] }>()
+      const own: number[] = []
+      const order: string[] = []
+      const items: { lemma: string; inherent: string; forms: string[] }[] = []
+      for (const e of tables) {
+        const cell = e.cells!.find((c) => c.key === key)
+        if (!cell) continue
+        const tp = extractPattern(e.lemma, [cell.forms[0]!])
+        const cells = [{ key, forms: [tp.forms[0]!] }]
+        const shape = paradigmShapeKey(upos, tp.lemma, tp.openPrefix, cells)
+        let g = groups.get(shape)
+        if (!g) {
+          g = { rule: { id: '', upos, lemma: tp.lemma, openPrefix: tp.openPrefix, cells, members: 0, examples: [] }, lemmas: [], stems: [] }
+          groups.set(shape, g)
+          order.push(shape)
+        }
+        g.lemmas.push(e.lemma)
+        g.stems.push(tp.stems)
+        own.push(order.indexOf(shape))
+        items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms })
+      }
+      const rules = order.map((s, i) => {
+        const g = groups.get(s)!
+        return { ...g.rule, id: `${upos}:${key}:${i + 1}`, members: g.lemmas.length, examples: g.lemmas.slice(0, 3), shapes: stemShapes(g.stems) }
+      })
+      const finder = new CandidateFinder(rules, order.map((s) => groups.get(s)!.lemmas))
+      const examples: RankerExample[] = items.map((it, i) => {
+        const found = finder.find(it.lemma, upos, own[i]!)
+        const gold: number[] = []
+        found.forEach((c, k) => {
+          if (it.forms.includes(fillPattern(rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems))) gold.push(k)
+        })
+        return { local: lemmaFeatures(it.lemma, it.inherent, features), candidates: found.map((c) => c.paradigm), shared: found.map((c) => c.shared), gold }
+      })
+      out.push({ upos, key, rules, weights: trainRanker(examples, ranker), finder })
+    }
+  }
+  return out
+}
+
+/** The probability of each form of one cell for a lemma, best first. */
+export function cellFormDistribution(m: CellRuleModel, lemma: string, inherent: string, features: FeatureOptions): Map<string, number> {
+  const found = m.finder.find(lemma, m.upos)
+  const dist = new Map<string, number>()
+  if (found.length === 0) return dist
+  const probs = scoreCandidates(m.weights, lemmaFeatures(lemma, inherent, features), found.map((c) => c.paradigm), found.map((c) => c.shared))
+  found.forEach((c, i) => {
+    const form = fillPattern(m.rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems)
+    if (form) dist.set(form, (dist.get(form) ?? 0) + probs[i]!)
+  })
+  return dist
+}
+

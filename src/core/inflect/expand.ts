@@ -1,0 +1,103 @@
+// Expansion: the full table of a lemma — attested from the dictionary, or predicted with a score per cell.
+import { mergeFeats } from '../lexicon/feats.ts'
+import { entryKey } from '../lexicon/entry.ts'
+import type { InflectionModel } from './learn.ts'
+import { cellMarginals, type PredictedTable, predictTables } from './predict.ts'
+
+export type FormSource = 'attested' | 'predicted'
+
+/** One form of an expanded table. `feats` is the full analysis FEATS (cell + inherent). */
+export interface ExpandedForm {
+  form: string
+  feats: string
+  cell: string
+  source: FormSource
+  score: number
+}
+
+/**
+ * A lemma's table. `source` says whether it comes from the dictionary or from the best-ranked paradigm;
+ * `score` is the table's probability (1 for attested); `alternatives` are the next best tables on request.
+ */
+export interface ExpandedTable {
+  lemma: string
+  upos: string
+  inherent: string
+  source: FormSource
+  paradigm: string | null
+  score: number
+  forms: ExpandedForm[]
+  alternatives: PredictedTable[]
+}
+
+export interface ExpandOptions {
+  /** How many alternative tables to add (0 = none). */
+  alternatives?: number
+}
+
+/** Index from (lemma, upos) to lexicon entry position, built once per model. */
+const entryIndexCache = new WeakMap<InflectionModel, Map<string, number>>()
+
+function entryIndex(model: InflectionModel): Map<string, number> {
+  let idx = entryIndexCache.get(model)
+  if (!idx) {
+    idx = new Map(model.lexicon.entries.map((e, i) => [entryKey(e.lemma, e.upos), i]))
+    entryIndexCache.set(model, idx)
+  }
+  return idx
+}
+
+/**
+ * Expand one lemma. A lemma with a dictionary table gets it back unchanged; any other lemma gets the table
+ * of its best paradigm, each cell scored by the probability of its form over all candidate tables.
+ * Returns null when no learned paradigm of that UPOS applies.
+ * @example expandLemma(model, 'Mantel', 'NOUN').forms[2] // {form:'Mäntel', cell:'Case=Nom|Number=Plur', source:'predicted', score:0.93, ...}
+ */
+export function expandLemma(
+  model: InflectionModel,
+  lemma: string,
+  upos: string,
+  inherent?: string,
+  opts: ExpandOptions = {},
+): ExpandedTable | null {
+  const at = entryIndex(model).get(entryKey(lemma, upos))
+  const entry = at === undefined ? undefined : model.lexicon.entries[at]
+  const inh = inherent && inherent !== '_' ? inherent : (entry?.inherent ?? '_')
+  if (entry?.cells) {
+    const p = model.book.memberOf[at!]!
+    return {
+      lemma,
+      upos,
+      inherent: entry.inherent,
+      source: 'attested',
+      paradigm: p >= 0 ? model.book.paradigms[p]!.id : null,
+      score: 1,
+      forms: entry.cells.flatMap((c) =>
+        c.forms.map((form) => ({ form, feats: mergeFeats(entry.inherent, c.key), cell: c.key, source: 'attested' as const, score: 1 })),
+      ),
+      alternatives: [],
+    }
+  }
+  const tables = predictTables(model, lemma, upos, inh, Math.max(8, (opts.alternatives ?? 0) + 1))
+  const best = tables[0]
+  if (!best) return null
+  const marginals = new Map(cellMarginals(tables).map((c) => [c.key, new Map(c.forms.map((f) => [f.form, f.score]))]))
+  return {
+    lemma,
+    upos,
+    inherent: inh,
+    source: 'predicted',
+    paradigm: best.paradigm,
+    score: best.score,
+    forms: best.cells.flatMap((c) =>
+      c.forms.map((form) => ({
+        form,
+        feats: mergeFeats(inh, c.key),
+        cell: c.key,
+        source: 'predicted' as const,
+        score: marginals.get(c.key)?.get(form) ?? best.score,
+      })),
+    ),
+    alternatives: opts.alternatives ? tables.slice(1, 1 + opts.alternatives) : [],
+  }
+}
