@@ -1,0 +1,11 @@
+// The public surface of constraint building: type constraints, the coverage report, coupling, writers.
+export * from './analyzer.ts'
+export * from './conllu-allowed.ts'
+export * from './constrain-corpus.ts'
+export * from './constrain-token.ts'
+export * from './constraint-file.ts'
+export * from './coupling.ts'
+export * from './coverage-report.ts'
+export * from './form-tally.ts'
+export * from './report-summary.ts'
+export * from './type-constraint.ts'
