@@ -3,6 +3,7 @@ import { Command } from 'commander'
 import { registerEvaluate } from './evaluate-command.ts'
 import { registerExpand } from './expand-command.ts'
 import { registerLearn } from './learn-command.ts'
+import { registerConstrain } from './constrain-command.ts'
 
 const program = new Command('formfold')
   .description('Learn inflection paradigms from dictionary tables; predict tables; write tagging constraints.')
@@ -14,5 +15,6 @@ const program = new Command('formfold')
 registerLearn(program)
 registerExpand(program)
 registerEvaluate(program)
+registerConstrain(program)
 
 await program.parseAsync(process.argv)

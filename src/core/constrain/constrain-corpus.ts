@@ -35,8 +35,32 @@ export async function countTokens(
 }
 
 /**
- * The constraint rows of every counted form, most frequent first, with the report. A form with no
- * candidate gets an explicit unconstrained row; nothing is dropped.
+ * The constraint rows of every counted form, most frequent first, made one at a time (so a writer can
+ * stream them), each also added to `report`. A form with no candidate gets an explicit unconstrained row.
+ * @example
+ * const report = new ReportBuilder()
+ * for (const row of constraintRows(tally, analyzer, { level: 'upos' }, report)) out.write(formatConstraintRow(row, 'upos'))
+ * report.finish()
+ */
+export function* constraintRows(
+  tally: FormTally,
+  analyzer: Analyzer,
+  options: ConstrainOptions,
+  report?: ReportBuilder,
+  onProgress?: ProgressListener,
+): Generator<TypeConstraint> {
+  let done = 0
+  for (const [form, stats] of tally.byFrequency()) {
+    const contexts = { plain: stats.count > stats.initial, initial: stats.initial > 0 }
+    const row = constrainForm(analyzer, form, contexts, options, stats.count)
+    report?.add(row, stats)
+    yield row
+    if (onProgress && ++done % PROGRESS_EVERY === 0) onProgress('analyze', done, tally.types)
+  }
+}
+
+/**
+ * All rows of a tally at once, with the report. Nothing is dropped: unconstrained forms have rows.
  * @example constrainTally(tally, analyzer, { level: 'upos' }).report.tokens.coverage // 0.97
  */
 export function constrainTally(
@@ -46,14 +70,7 @@ export function constrainTally(
   onProgress?: ProgressListener,
 ): CorpusConstraints {
   const report = new ReportBuilder(options)
-  const rows: TypeConstraint[] = []
-  for (const [form, stats] of tally.byFrequency()) {
-    const contexts = { plain: stats.count > stats.initial, initial: stats.initial > 0 }
-    const row = constrainForm(analyzer, form, contexts, options, stats.count)
-    report.add(row, stats)
-    rows.push(row)
-    if (onProgress && rows.length % PROGRESS_EVERY === 0) onProgress('analyze', rows.length, tally.types)
-  }
+  const rows = [...constraintRows(tally, analyzer, options, report, onProgress)]
   return { rows, report: report.finish(), tally }
 }
 

@@ -12,7 +12,8 @@ export type ConstraintFormat = 'tsv' | 'jsonl'
 
 /** What the header says, so a file can be traced back to the model and the run that made it. */
 export interface ConstraintFileHeader {
-  model: { name: string; version: string | number }
+  /** `digest`: a content hash of the model file, when known, so the exact model can be found again. */
+  model: { name: string; version: string | number; digest?: string }
   /** The corpus, or null for the whole-lexicon file (every form the model knows). */
   corpus: { file: string; tokens: number; types: number } | null
   options: ConstrainOptions
@@ -43,7 +44,7 @@ export function constraintHeaderLines(header: ConstraintFileHeader): string[] {
   const tags = options.level === 'upos' ? 'UPOS tags' : 'UPOS|FEATS tags'
   return [
     '# formfold constraint file',
-    `# model: ${oneLine(model.name)}, version ${model.version}`,
+    `# model: ${oneLine(model.name)}, version ${model.version}${model.digest ? `, ${model.digest}` : ''}`,
     corpus
       ? `# corpus: ${oneLine(corpus.file)}, ${corpus.tokens} tokens, ${corpus.types} form types`
       : '# corpus: none; every form the model knows (count 0)',

@@ -1,0 +1,61 @@
+// The model as `formfold constrain` uses it: a name and version for the header, an analyzer, its forms.
+import { createHash } from 'node:crypto'
+import { readFile } from 'node:fs/promises'
+import { basename } from 'node:path'
+import type { Analyzer, Candidate } from '../core/constrain/index.ts'
+import { lookupTiers } from '../core/lookup/normalize.ts'
+import { decodeModel } from '../core/model/decode-model.ts'
+import { MODEL_VERSION } from '../core/model/encode-model.ts'
+import type { Model } from '../core/model/model.ts'
+import { EXIT } from './io.ts'
+
+/** What the command needs of a model file. */
+export interface ConstrainModel {
+  name: string
+  version: string
+  /** `sha256:` and the first 16 hex digits of the file's hash. */
+  digest: string
+  analyzer: Analyzer
+  forms(): Iterable<string>
+}
+
+/**
+ * Read a model file (exit 2 when it is missing; a bad file throws its `bad-model` problem).
+ * @example const { analyzer } = await loadConstrainModel('en.model.json')
+ */
+export async function loadConstrainModel(path: string): Promise<ConstrainModel> {
+  let text: string
+  try {
+    text = await readFile(path, 'utf8')
+  } catch {
+    process.stderr.write(`formfold constrain: ${path}: cannot read the model file\n`)
+    process.exit(EXIT.badInput)
+  }
+  const model = decodeModel(text)
+  // The file's own format version (decoding checked it); the header names it.
+  const version = /"version"\s*:\s*"([^"]*)"/.exec(text.slice(0, 500))?.[1] ?? MODEL_VERSION
+  return {
+    name: basename(path)
+      .replace(/\.json$/i, '')
+      .replace(/\.model$/i, ''),
+    version,
+    digest: `sha256:${createHash('sha256').update(text).digest('hex').slice(0, 16)}`,
+    analyzer: indexAnalyzer(model),
+    forms: () => model.index.forms(),
+  }
+}
+
+/** Index lookup through the normalization tiers: attested and predicted analyses (no guesses). */
+export function indexAnalyzer(model: Model): Analyzer {
+  return (form) => {
+    for (const tier of lookupTiers(form)) {
+      const found: Candidate[] = []
+      for (const key of tier) {
+        if (key.folded) continue
+        for (const a of model.index.get(key.key) ?? []) found.push(a)
+      }
+      if (found.length > 0) return found
+    }
+    return []
+  }
+}
