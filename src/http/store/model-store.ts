@@ -119,14 +119,23 @@ export class ModelStore<M> {
     const version = (existing.at(-1)?.version ?? 0) + 1
     const createdAt = new Date().toISOString()
     const key = versionKey(name, version)
-    await this.#blobs.put(key, bytes, { sha256, createdAt, summary: JSON.stringify(summary) })
-    const back = await this.#blobs.get(key)
+    let back: Awaited<ReturnType<BlobStore['get']>>
+    try {
+      await this.#blobs.put(key, bytes, { sha256, createdAt, summary: JSON.stringify(summary) })
+      back = await this.#blobs.get(key)
+    } catch (err) {
+      throw storeFailed(`version ${version} of "${name}" could not be written; the served version is unchanged`, err)
+    }
     if (!back || (await sha256Hex(back.bytes)) !== sha256) {
       await this.#blobs.delete(key).catch(() => undefined)
       throw new ApiError(503, 'store-failed', `version ${version} of "${name}" did not read back intact; the served version is unchanged`)
     }
     const pointer: Pointer = { version, sha256, movedAt: new Date().toISOString() }
-    await this.#blobs.put(pointerKey(name), new TextEncoder().encode(JSON.stringify(pointer)), { version: String(version) })
+    try {
+      await this.#blobs.put(pointerKey(name), new TextEncoder().encode(JSON.stringify(pointer)), { version: String(version) })
+    } catch (err) {
+      throw storeFailed(`the pointer of "${name}" could not be moved to version ${version}; the served version is unchanged`, err)
+    }
     return { version, sha256, bytes: bytes.byteLength, createdAt, summary, model }
   }
 
@@ -163,4 +172,10 @@ export class ModelStore<M> {
     }
     await this.#blobs.delete(key)
   }
+}
+
+/** A storage fault as a 503 (logged with its cause; the answer does not carry internals). */
+function storeFailed(message: string, cause: unknown): ApiError {
+  console.error(`formfold: ${message}`, cause)
+  return new ApiError(503, 'store-failed', message)
 }

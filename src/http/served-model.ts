@@ -1,0 +1,33 @@
+// The model as the service sees it: the core model, its file codec, its summary, and the media type of its file.
+import { decodeModel } from '../core/model/decode-model.ts'
+import type { Model } from '../core/model/model.ts'
+import type { ModelCodec, ModelSummary } from './store/model-store.ts'
+
+/** The model every route answers from. */
+export type ServedModel = Model
+
+/** Media type of a model file in a write (`application/json` is accepted too). */
+export const MODEL_MEDIA_TYPE = 'application/vnd.formfold.model+json'
+
+/** Media types a model-file write may declare. */
+export const MODEL_MEDIA_TYPES: readonly string[] = [MODEL_MEDIA_TYPE, 'application/json']
+
+/**
+ * Counts that describe a model: lemmas (tables + bare), paradigms, indexed forms and analyses.
+ * @example summarizeModel(model) // { lemmas: 1136, tables: 496, bareLemmas: 640, paradigms: 31, forms: 20412, analyses: 31877 }
+ */
+export function summarizeModel(model: Model): ModelSummary {
+  const entries = model.inflection.lexicon.entries
+  const tables = entries.reduce((n, e) => n + (e.cells ? 1 : 0), 0)
+  return {
+    lemmas: entries.length,
+    tables,
+    bareLemmas: entries.length - tables,
+    paradigms: model.inflection.book.paradigms.length,
+    forms: model.index.formCount,
+    analyses: model.index.analysisCount,
+  }
+}
+
+/** How the model store reads and describes model files. */
+export const modelCodec: ModelCodec<Model> = { decode: decodeModel, summarize: summarizeModel }
