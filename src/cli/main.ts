@@ -1,8 +1,6 @@
 // The formfold command line: one subcommand per file, each a thin wrapper over a core function.
 import { Command } from 'commander'
 import { registerEvaluate } from './evaluate-command.ts'
-import { registerExpand } from './expand-command.ts'
-import { registerLearn } from './learn-command.ts'
 import { registerConstrain } from './constrain-command.ts'
 
 const program = new Command('formfold')
@@ -12,8 +10,6 @@ const program = new Command('formfold')
     process.exit(err.exitCode === 0 ? 0 : 2)
   })
 
-registerLearn(program)
-registerExpand(program)
 registerEvaluate(program)
 registerConstrain(program)
 

@@ -1,7 +1,7 @@
 // The evaluation protocol: learn from TRAIN's tables, predict each TEST lemma's table from (lemma, upos) alone.
 import type { Lexicon } from '../lexicon/lexicon.ts'
 import { type LearnOptions, learnFromLexicon, type InflectionModel, DEFAULT_LEARN_OPTIONS } from '../inflect/learn.ts'
-import { cellMarginals, predictTables } from '../inflect/predict.ts'
+import { predictLemma } from '../inflect/predict.ts'
 
 /** The inflection half of the protocol's figures. */
 export interface InflectionScores {
@@ -26,8 +26,8 @@ export function scoreInflection(model: InflectionModel, test: Lexicon): Inflecti
   for (const e of test.entries) {
     if (!e.cells) continue
     lemmas++
-    const tables = predictTables(model, e.lemma, e.upos, e.inherent, 8)
-    const best = new Map(cellMarginals(tables).map((c) => [c.key, c.forms[0]?.form]))
+    const { tables, cells: scored } = predictLemma(model, e.lemma, e.upos, e.inherent, 8)
+    const best = new Map(scored.map((c) => [c.key, c.forms[0]?.form]))
     let all = true
     for (const c of e.cells) {
       cells++

@@ -5,6 +5,7 @@ import { CandidateFinder } from './candidates.ts'
 import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
+import { chooseL2 } from './tune.ts'
 import { DEFAULT_RANKER_OPTIONS, type RankerExample, type RankerOptions, type RankerWeights, trainRanker } from './ranker.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
@@ -16,18 +17,23 @@ export interface CombineOptions {
   cellFloor: number
   /** The cell sum is divided by (cells ** meanPower): 1 is a mean, 0 a plain sum. */
   meanPower: number
+  /** Share of a cell's form probability taken from its own rule ranker rather than from the tables. */
+  cellMix: number
 }
 
 export interface LearnOptions {
   features: FeatureOptions
   ranker: RankerOptions
   combine: CombineOptions
+  /** Candidate L2 strengths, chosen on held-out training tables; one value skips the choice. */
+  l2Grid: number[]
 }
 
 export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
   features: DEFAULT_FEATURE_OPTIONS,
   ranker: DEFAULT_RANKER_OPTIONS,
-  combine: { cellWeight: 10, tableFloor: 0.001, cellFloor: 0.001, meanPower: 1 },
+  l2Grid: [3e-3],
+  combine: { cellWeight: 10, tableFloor: 0.001, cellFloor: 0.001, meanPower: 1, cellMix: 0.5 },
 }
 
 /** What learning produces: the lexicon, its paradigm book, and the weights that choose among paradigms. */
@@ -50,8 +56,13 @@ export function learnInflection(entries: Iterable<Entry>, options: LearnOptions 
   return learnFromLexicon(lexicon, options)
 }
 
-/** As learnInflection, from a lexicon already built. */
+/** As learnInflection, from a lexicon already built; the L2 strength is chosen first when a grid is given. */
 export function learnFromLexicon(lexicon: Lexicon, options: LearnOptions = DEFAULT_LEARN_OPTIONS): InflectionModel {
+  const l2 = options.l2Grid.length > 0 ? chooseL2(lexicon, options, options.l2Grid, learnOnce) : options.ranker.l2
+  return learnOnce(lexicon, { ...options, ranker: { ...options.ranker, l2 }, l2Grid: [l2] })
+}
+
+function learnOnce(lexicon: Lexicon, options: LearnOptions): InflectionModel {
   const book = extractParadigms(lexicon)
   const members: string[][] = book.paradigms.map(() => [])
   book.memberOf.forEach((p, i) => {
@@ -75,6 +86,6 @@ export function learnFromLexicon(lexicon: Lexicon, options: LearnOptions = DEFAU
     })
   })
   const weights = trainRanker(examples, options.ranker)
-  const cells = options.combine.cellWeight > 0 ? learnCellRules(lexicon, options.features, options.ranker) : []
+  const cells = options.combine.cellWeight > 0 || options.combine.cellMix > 0 ? learnCellRules(lexicon, options.features, options.ranker) : []
   return { lexicon, book, weights, finder, cells, options }
 }

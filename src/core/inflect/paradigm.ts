@@ -53,28 +53,35 @@ const MAX_MATCHES = 64
 export function matchAll(lemma: Pattern, openPrefix: boolean, word: string): string[][] {
   const out: string[][] = []
   const stems: string[] = []
-  const chars = [...word]
+  const n = word.length
   const step = (part: number, pos: number): void => {
     if (out.length >= MAX_MATCHES) return
     if (part === lemma.length) {
-      if (pos === chars.length) out.push([...stems])
+      if (pos === n) out.push(stems.slice())
       return
     }
     const p = lemma[part]!
     if (typeof p === 'string') {
-      const lit = [...p]
-      for (let k = 0; k < lit.length; k++) if (chars[pos + k] !== lit[k]) return
-      step(part + 1, pos + lit.length)
+      if (word.startsWith(p, pos)) step(part + 1, pos + p.length)
       return
     }
     const min = p === 0 && openPrefix ? 0 : 1
-    for (let end = chars.length; end >= pos + min; end--) {
-      stems[p] = chars.slice(pos, end).join('')
+    // A variable ending in a literal can only end where that literal starts.
+    const next = lemma[part + 1]
+    for (let end = n; end >= pos + min; end--) {
+      if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
+      if (typeof next === 'string' && !word.startsWith(next, end)) continue
+      if (next === undefined && end !== n) continue
+      stems[p] = word.slice(pos, end)
       step(part + 1, end)
     }
   }
   step(0, 0)
   return out
+}
+
+function isHighSurrogate(c: number): boolean {
+  return c >= 0xd800 && c <= 0xdbff
 }
 
 /** How well stem contents fit what the paradigm's members had (higher is better). */
@@ -85,7 +92,7 @@ export function stemFit(stems: readonly string[], shapes: readonly StemShape[] |
     const s = stems[i]!
     const sh = shapes[i]
     if (!sh) continue
-    if (sh.seen.includes(s)) fit += 3
+    if (s.length >= 2 && sh.seen.includes(s)) fit += 3
     if (s.length >= sh.minLength && s.length <= sh.maxLength) fit += 1
     if (s && sh.first.includes(s[0]!)) fit += 1
     if (s && sh.last.includes(s[s.length - 1]!)) fit += 1

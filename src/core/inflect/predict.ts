@@ -20,8 +20,18 @@ export interface PredictedTable {
  * @example predictTables(model, 'Mantel', 'NOUN')[0].cells[2] // { key: 'Case=Nom|Number=Plur', forms: ['Mäntel'] }
  */
 export function predictTables(model: InflectionModel, lemma: string, upos: string, inherent = '_', limit = 5): PredictedTable[] {
+  return rankTables(model, lemma, upos, inherent, limit).tables
+}
+
+function rankTables(
+  model: InflectionModel,
+  lemma: string,
+  upos: string,
+  inherent: string,
+  limit: number,
+): { tables: PredictedTable[]; dists: Map<string, Map<string, number>> } {
   const found = model.finder.find(lemma, upos)
-  if (found.length === 0) return []
+  if (found.length === 0) return { tables: [], dists: new Map() }
   const probs = scoreCandidates(
     model.weights,
     lemmaFeatures(lemma, inherent, model.options.features),
@@ -48,24 +58,64 @@ export function predictTables(model: InflectionModel, lemma: string, upos: strin
   let ranked = [...tables.values()].map((t) => t.table)
   const z = ranked.reduce((a, t) => a + t.score, 0)
   for (const t of ranked) t.score = z > 0 ? t.score / z : 0
-  if (model.cells.length > 0 && model.options.combine.cellWeight > 0) ranked = combineWithCells(model, lemma, upos, inherent, ranked)
+  const dists = cellDistributions(model, lemma, upos, inherent)
+  if (dists.size > 0) ranked = combineWithCells(model, upos, ranked, dists)
   ranked.sort((a, b) => b.score - a.score || (a.paradigm < b.paradigm ? -1 : 1))
-  return ranked.slice(0, limit)
+  return { tables: ranked.slice(0, limit), dists }
+}
+
+/** A lemma's prediction: ranked candidate tables and, per cell, each form's probability. */
+export interface LemmaPrediction {
+  tables: PredictedTable[]
+  cells: ScoredCell[]
+}
+
+/**
+ * Predict a lemma: its candidate tables, and per cell the probability of each form — the tables' marginal
+ * mixed with the cell's own rule ranker (`combine.cellMix`), so a cell can follow its own evidence.
+ * @example predictLemma(model, 'begründen', 'VERB').cells.find((c) => c.key === 'Tense=Past|VerbForm=Part')!.forms[0].form // 'begründet'
+ */
+export function predictLemma(model: InflectionModel, lemma: string, upos: string, inherent = '_', limit = 5): LemmaPrediction {
+  const { tables, dists } = rankTables(model, lemma, upos, inherent, Math.max(limit, 8))
+  const mix = model.options.combine.cellMix
+  const marg = cellMarginals(tables)
+  const order = model.lexicon.cellKeys[upos] ?? []
+  const keys = [...new Set([...marg.map((c) => c.key), ...dists.keys()])].sort((a, b) => order.indexOf(a) - order.indexOf(b))
+  const byKey = new Map(marg.map((c) => [c.key, c]))
+  const cells: ScoredCell[] = keys.map((key) => {
+    const m = new Map<string, number>()
+    const fromTables = byKey.get(key)
+    const own = dists.get(key)
+    const wt = own ? 1 - mix : 1
+    for (const f of fromTables?.forms ?? []) m.set(f.form, (m.get(f.form) ?? 0) + wt * f.score)
+    if (own) for (const [f, p] of own) m.set(f, (m.get(f) ?? 0) + (fromTables ? mix : 1) * p)
+    return { key, forms: [...m].sort((a, b) => b[1] - a[1] || (a[0] < b[0] ? -1 : 1)).map(([form, score]) => ({ form, score })) }
+  })
+  return { tables: tables.slice(0, limit), cells }
+}
+
+function cellDistributions(model: InflectionModel, lemma: string, upos: string, inherent: string): Map<string, Map<string, number>> {
+  const dists = new Map<string, Map<string, number>>()
+  if (model.options.combine.cellWeight <= 0 && model.options.combine.cellMix <= 0) return dists
+  for (const m of model.cells) {
+    if (m.upos !== upos) continue
+    const d = cellFormDistribution(m, lemma, inherent, model.options.features)
+    if (d.size > 0) dists.set(m.key, d)
+  }
+  return dists
 }
 
 /**
  * Rescore the whole-table candidates with the per-cell rule rankers (a product of experts), and add the
  * table made of each cell's most probable form, which may combine choices no single training table had.
  */
-function combineWithCells(model: InflectionModel, lemma: string, upos: string, inherent: string, tables: PredictedTable[]): PredictedTable[] {
+function combineWithCells(
+  model: InflectionModel,
+  upos: string,
+  tables: PredictedTable[],
+  dists: Map<string, Map<string, number>>,
+): PredictedTable[] {
   const { cellWeight, tableFloor, cellFloor } = model.options.combine
-  const dists = new Map<string, Map<string, number>>()
-  for (const m of model.cells) {
-    if (m.upos !== upos) continue
-    const d = cellFormDistribution(m, lemma, inherent, model.options.features)
-    if (d.size > 0) dists.set(m.key, d)
-  }
-  if (dists.size === 0) return tables
   const cellOrder = model.lexicon.cellKeys[upos] ?? []
   const composed: PredictedTable = {
     paradigm: tables[0]?.paradigm ?? '',

@@ -23,7 +23,7 @@ export interface RankerOptions {
   seed: number
 }
 
-export const DEFAULT_RANKER_OPTIONS: RankerOptions = { epochs: 12, rate: 0.3, l2: 1e-5, seed: 1 }
+export const DEFAULT_RANKER_OPTIONS: RankerOptions = { epochs: 12, rate: 0.3, l2: 3e-3, seed: 1 }
 
 /**
  * Probabilities of the candidates (softmax of their scores).

@@ -1,0 +1,73 @@
+// `formfold evaluate --train TABLES --test TABLES [--json]`: the evaluation protocol of DESIGN.md.
+import type { Command } from 'commander'
+import { buildLexicon, learnForEvaluation, scoreInflection } from '../core/index.ts'
+import { readSources, runCommand } from './io.ts'
+
+/** The protocol's keys, in order. */
+const KEYS = [
+  'formAccuracy',
+  'tableAccuracy',
+  'top3TableAccuracy',
+  'unseenRecall',
+  'unseenMeanCandidates',
+  'listedRecall',
+  'listedPrecision',
+  'goldMeanAnalyses',
+  'learnSeconds',
+  'lemmas',
+  'cells',
+] as const
+
+export function registerEvaluate(program: Command): void {
+  program
+    .command('evaluate')
+    .description('learn from TRAIN tables, predict the tables of TEST lemmas from (lemma, upos), and score')
+    .requiredOption('--train <file>', 'table rows to learn from (only tables are used)')
+    .requiredOption('--test <file>', 'table rows to predict')
+    .option('--json', 'print one JSON object with exactly the protocol keys')
+    .option('--skip-bad', 'count bad lines instead of stopping at the first')
+    .action((opts: { train: string; test: string; json?: boolean; skipBad?: boolean }) =>
+      runCommand(async () => {
+        const skipBad = Boolean(opts.skipBad)
+        const train = buildLexicon((await readSources([opts.train], { skipBad })).entries)
+        const test = buildLexicon((await readSources([opts.test], { skipBad })).entries)
+        const t0 = performance.now()
+        const model = learnForEvaluation(train)
+        const learnSeconds = (performance.now() - t0) / 1000
+        const s = scoreInflection(model, test)
+        const lookup = await lookupFigures(train, test)
+        const result: Record<string, number | null> = { ...s, ...lookup, learnSeconds: round(learnSeconds, 2) }
+        const ordered = Object.fromEntries(KEYS.map((k) => [k, result[k] ?? null]))
+        if (opts.json) process.stdout.write(`${JSON.stringify(ordered)}\n`)
+        else for (const k of KEYS) process.stdout.write(`${k.padEnd(22)}${fmt(ordered[k])}\n`)
+      }),
+    )
+}
+
+type LookupKeys = 'unseenRecall' | 'unseenMeanCandidates' | 'listedRecall' | 'listedPrecision' | 'goldMeanAnalyses'
+
+/** The lookup half of the protocol (from the lookup module, when it is present). */
+async function lookupFigures(
+  train: ReturnType<typeof buildLexicon>,
+  test: ReturnType<typeof buildLexicon>,
+): Promise<Partial<Record<LookupKeys, number | null>>> {
+  try {
+    const mod = (await import('../core/lookup/lookup-metrics.ts')) as {
+      lookupMetrics: (a: unknown, b: unknown) => Record<LookupKeys, number>
+    }
+    return mod.lookupMetrics(train, test)
+  } catch (err) {
+    if (err instanceof Error && /Cannot find|ERR_MODULE_NOT_FOUND/.test(err.message)) return {}
+    throw err
+  }
+}
+
+function round(x: number, d: number): number {
+  const f = 10 ** d
+  return Math.round(x * f) / f
+}
+
+function fmt(v: number | null | undefined): string {
+  if (v === null || v === undefined) return 'n/a'
+  return Number.isInteger(v) ? String(v) : v.toFixed(4)
+}
