@@ -2,7 +2,7 @@
 import { mergeFeats } from '../lexicon/feats.ts'
 import { entryKey } from '../lexicon/entry.ts'
 import type { InflectionModel } from './learn.ts'
-import { cellMarginals, type PredictedTable, predictTables } from './predict.ts'
+import { type PredictedTable, predictLemma } from './predict.ts'
 
 export type FormSource = 'attested' | 'predicted'
 
@@ -78,10 +78,11 @@ export function expandLemma(
       alternatives: [],
     }
   }
-  const tables = predictTables(model, lemma, upos, inh, Math.max(8, (opts.alternatives ?? 0) + 1))
+  const { tables, cells } = predictLemma(model, lemma, upos, inh, Math.max(8, (opts.alternatives ?? 0) + 1))
   const best = tables[0]
   if (!best) return null
-  const marginals = new Map(cellMarginals(tables).map((c) => [c.key, new Map(c.forms.map((f) => [f.form, f.score]))]))
+  // Each cell's most probable form; the best table's cell set (a defective paradigm keeps its gaps).
+  const have = new Set(best.cells.map((c) => c.key))
   return {
     lemma,
     upos,
@@ -89,15 +90,9 @@ export function expandLemma(
     source: 'predicted',
     paradigm: best.paradigm,
     score: best.score,
-    forms: best.cells.flatMap((c) =>
-      c.forms.map((form) => ({
-        form,
-        feats: mergeFeats(inh, c.key),
-        cell: c.key,
-        source: 'predicted' as const,
-        score: marginals.get(c.key)?.get(form) ?? best.score,
-      })),
-    ),
+    forms: cells
+      .filter((c) => have.has(c.key) && c.forms[0])
+      .map((c) => ({ form: c.forms[0]!.form, feats: mergeFeats(inh, c.key), cell: c.key, source: 'predicted' as const, score: c.forms[0]!.score })),
     alternatives: opts.alternatives ? tables.slice(1, 1 + opts.alternatives) : [],
   }
 }

@@ -1,0 +1,52 @@
+// `formfold expand -m MODEL [LEMMAS|-]`: the tables of the given (or all table-less) lemmas as table rows.
+import type { Command } from 'commander'
+import { type Entry, type ExpandedTable, expandLemma, ProblemError } from '../core/index.ts'
+import type { Model } from '../core/model/model.ts'
+import { formatJsonLine, formatTableRow } from '../formats/index.ts'
+import { readSources, runCommand } from './io.ts'
+import { loadModelFile } from './model-file.ts'
+
+export function registerExpand(program: Command): void {
+  program
+    .command('expand')
+    .description('tables of the given lemmas (a lemma list), or of every lemma-only entry of the model')
+    .requiredOption('-m, --model <file>', 'model file (from formfold learn)')
+    .argument('[lemmas]', 'lemma list (lemma<TAB>upos[<TAB>feats]); - for stdin; none = all table-less lemmas')
+    .option('--scores', 'add source and score columns (TSV)')
+    .option('--format <fmt>', 'tsv or jsonl', 'tsv')
+    .option('--alternatives <k>', 'also give the k next-best tables (jsonl)', '0')
+    .option('--skip-bad', 'count bad lines instead of stopping at the first')
+    .action((lemmas: string | undefined, opts: { model: string; scores?: boolean; format: string; alternatives: string; skipBad?: boolean }) =>
+      runCommand(async () => {
+        if (opts.format !== 'tsv' && opts.format !== 'jsonl') {
+          throw new ProblemError({ code: 'bad-entry', message: `--format must be tsv or jsonl, not "${opts.format}"` })
+        }
+        const alternatives = Number.parseInt(opts.alternatives, 10)
+        if (!Number.isInteger(alternatives) || alternatives < 0 || alternatives > 20) {
+          throw new ProblemError({ code: 'bad-entry', message: '--alternatives must be an integer from 0 to 20' })
+        }
+        const model = await loadModelFile(opts.model)
+        const wanted = lemmas ? (await readSources([lemmas], { skipBad: Boolean(opts.skipBad), format: 'lemmas' })).entries : bareLemmas(model)
+        const out = process.stdout
+        for (const e of wanted) {
+          const table = expandLemma(model.inflection, e.lemma, e.upos, e.feats, { alternatives })
+          if (!table) {
+            process.stderr.write(`no learned paradigm of ${e.upos} applies to "${e.lemma}"\n`)
+            continue
+          }
+          const text = opts.format === 'jsonl' ? `${formatJsonLine(table)}\n` : tableRows(table, Boolean(opts.scores))
+          if (!out.write(text)) await new Promise((r) => out.once('drain', r))
+        }
+      }),
+    )
+}
+
+function tableRows(t: ExpandedTable, scores: boolean): string {
+  return t.forms
+    .map((f) => `${formatTableRow({ lemma: t.lemma, form: f.form, upos: t.upos, feats: f.feats, source: f.source, score: f.score }, { scores })}\n`)
+    .join('')
+}
+
+function bareLemmas(model: Model): Entry[] {
+  return model.inflection.lexicon.entries.filter((e) => !e.cells).map((e) => ({ lemma: e.lemma, upos: e.upos, feats: e.inherent }))
+}

@@ -1,0 +1,37 @@
+// `formfold learn SOURCES… -o MODEL`: tables, entries and lemma lists in; a model file out; summary on stderr.
+import type { Command } from 'commander'
+import { buildModel } from '../core/model/build-model.ts'
+import { encodeModel } from '../core/model/encode-model.ts'
+import { readSources, reportSkipped, runCommand, writeAtomic } from './io.ts'
+
+export function registerLearn(program: Command): void {
+  program
+    .command('learn')
+    .description('learn paradigms from the tables of the sources; predict tables for lemma-only entries')
+    .argument('<sources...>', 'table rows (.tsv), entries (.jsonl) or lemma lists (.tsv, 2-3 columns)')
+    .requiredOption('-o, --output <model>', 'model file to write (written atomically)')
+    .option('--skip-bad', 'count bad lines (first few shown) instead of stopping at the first')
+    .action((sources: string[], opts: { output: string; skipBad?: boolean }) =>
+      runCommand(async () => {
+        const t0 = performance.now()
+        const read = await readSources(sources, { skipBad: Boolean(opts.skipBad) })
+        const model = buildModel(read.entries)
+        const text = encodeModel(model)
+        await writeAtomic(opts.output, text)
+        const lex = model.inflection.lexicon
+        const tables = lex.entries.filter((e) => e.cells).length
+        const forms = model.index.formCount
+        const seconds = ((performance.now() - t0) / 1000).toFixed(1)
+        process.stderr.write(
+          `learned ${model.inflection.book.paradigms.length} paradigms from ${tables} tables; ` +
+            `${lex.entries.length - tables} lemma-only entries got predicted tables; ${forms} forms indexed; ` +
+            `${text.length} bytes → ${opts.output} in ${seconds} s\n`,
+        )
+        if (read.languageSpecific.length > 0) {
+          process.stderr.write(`language-specific features: ${read.languageSpecific.join(' ')}\n`)
+        }
+        for (const p of lex.problems) process.stderr.write(`note: ${p.file ?? ''}${p.line ? `:${p.line}` : ''} ${p.message}\n`)
+        reportSkipped(read)
+      }),
+    )
+}
