@@ -1,6 +1,7 @@
 // `formfold evaluate --train TABLES --test TABLES [--json]`: the evaluation protocol of DESIGN.md.
 import type { Command } from 'commander'
 import { buildLexicon, learnForEvaluation, scoreInflection } from '../core/index.ts'
+import { lookupMetrics } from '../core/lookup/lookup-metrics.ts'
 import { readSources, runCommand } from './io.ts'
 
 /** The protocol's keys, in order. */
@@ -35,31 +36,13 @@ export function registerEvaluate(program: Command): void {
         const model = learnForEvaluation(train)
         const learnSeconds = (performance.now() - t0) / 1000
         const s = scoreInflection(model, test)
-        const lookup = await lookupFigures(train, test)
+        const lookup = lookupMetrics(model, test)
         const result: Record<string, number | null> = { ...s, ...lookup, learnSeconds: round(learnSeconds, 2) }
         const ordered = Object.fromEntries(KEYS.map((k) => [k, result[k] ?? null]))
         if (opts.json) process.stdout.write(`${JSON.stringify(ordered)}\n`)
         else for (const k of KEYS) process.stdout.write(`${k.padEnd(22)}${fmt(ordered[k])}\n`)
       }),
     )
-}
-
-type LookupKeys = 'unseenRecall' | 'unseenMeanCandidates' | 'listedRecall' | 'listedPrecision' | 'goldMeanAnalyses'
-
-/** The lookup half of the protocol (from the lookup module, when it is present). */
-async function lookupFigures(
-  train: ReturnType<typeof buildLexicon>,
-  test: ReturnType<typeof buildLexicon>,
-): Promise<Partial<Record<LookupKeys, number | null>>> {
-  try {
-    const mod = (await import('../core/lookup/lookup-metrics.ts')) as {
-      lookupMetrics: (a: unknown, b: unknown) => Record<LookupKeys, number>
-    }
-    return mod.lookupMetrics(train, test)
-  } catch (err) {
-    if (err instanceof Error && /Cannot find|ERR_MODULE_NOT_FOUND/.test(err.message)) return {}
-    throw err
-  }
 }
 
 function round(x: number, d: number): number {
