@@ -1,0 +1,4 @@
+// The streaming-expansion suite under Node.
+import { describeExpandStream } from './expand-stream-suite.ts'
+
+describeExpandStream()
