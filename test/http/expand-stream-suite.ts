@@ -18,7 +18,7 @@ const LEMMAS: LemmaRequest[] = Array.from({ length: 500 }, (_, i) => ({
  * @example describeExpandStream()
  */
 export function describeExpandStream(): void {
-  describe('streaming expansion', () => {
+  describe('streaming expansion', { timeout: 30_000 }, () => {
     for (const format of ['jsonl', 'tsv'] as const) {
       it(`sends the first ${format} rows before the last lemma is processed`, async () => {
         const model = decodeModel(DEMO_MODEL_TEXT)

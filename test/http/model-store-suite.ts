@@ -25,7 +25,7 @@ const hasAdded = (m: ServedModel) => m.inflection.lexicon.entries.some((e) => e.
  * @example describeModelStore('memory', () => new MemoryBlobStore())
  */
 export function describeModelStore(label: string, makeBlobs: () => BlobStore): void {
-  describe(`model store over ${label}`, () => {
+  describe(`model store over ${label}`, { timeout: 60_000 }, () => {
     it('publishes a first version and serves it', async () => {
       const store = new ModelStore(makeBlobs(), modelCodec)
       const v = await store.publish('alpha', modelV1)

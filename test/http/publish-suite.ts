@@ -23,7 +23,7 @@ async function served(t: RouteTarget, name: string): Promise<{ version: string |
  * @example describePublishing(() => target)
  */
 export function describePublishing(target: () => RouteTarget): void {
-  describe('publishing models', () => {
+  describe('publishing models', { timeout: 60_000 }, () => {
     it('refuses a write without the token, or with another token (401)', async () => {
       const t = target()
       const name = freshName('auth')

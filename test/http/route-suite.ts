@@ -17,7 +17,7 @@ const analysis = (lemma: string, upos: string, feats: string, source: string) =>
  * @example describeRoutes(() => ({ fetch: (p, i) => app.request(p, i, env), token }))
  */
 export function describeRoutes(target: () => RouteTarget): void {
-  describe('read routes', () => {
+  describe('read routes', { timeout: 30_000 }, () => {
     it('answers /health with CORS open to any origin', async () => {
       const res = await target().fetch('/health', { headers: { origin: 'https://elsewhere.example' } })
       expect(res.status).toBe(200)

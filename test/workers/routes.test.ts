@@ -12,7 +12,7 @@ const token = 'workers-suite-write-token'
 const bindings = { ...env, WRITE_TOKEN: token }
 const target = (): RouteTarget => ({ fetch: (path, init) => Promise.resolve(app.request(path, init, bindings)), token })
 
-describe('the worker entry point', () => {
+describe('the worker entry point', { timeout: 30_000 }, () => {
   it('runs in workerd with the R2 and KV bindings', async () => {
     expect(navigator.userAgent).toBe('Cloudflare-Workers')
     expect(typeof env.BUCKET.put).toBe('function')
