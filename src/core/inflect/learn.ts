@@ -25,14 +25,14 @@ export interface LearnOptions {
   features: FeatureOptions
   ranker: RankerOptions
   combine: CombineOptions
-  /** Candidate L2 strengths, chosen on held-out training tables; one value skips the choice. */
+  /** Candidate L2 strengths, chosen on held-out training tables (two or more); otherwise ranker.l2 is used. */
   l2Grid: number[]
 }
 
 export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
   features: DEFAULT_FEATURE_OPTIONS,
   ranker: DEFAULT_RANKER_OPTIONS,
-  l2Grid: [3e-3],
+  l2Grid: [3e-3, 1e-2],
   combine: { cellWeight: 10, tableFloor: 0.001, cellFloor: 0.001, meanPower: 1, cellMix: 0.5 },
 }
 
@@ -58,7 +58,7 @@ export function learnInflection(entries: Iterable<Entry>, options: LearnOptions 
 
 /** As learnInflection, from a lexicon already built; the L2 strength is chosen first when a grid is given. */
 export function learnFromLexicon(lexicon: Lexicon, options: LearnOptions = DEFAULT_LEARN_OPTIONS): InflectionModel {
-  const l2 = options.l2Grid.length > 0 ? chooseL2(lexicon, options, options.l2Grid, learnOnce) : options.ranker.l2
+  const l2 = options.l2Grid.length > 1 ? chooseL2(lexicon, options, options.l2Grid, learnOnce) : options.ranker.l2
   return learnOnce(lexicon, { ...options, ranker: { ...options.ranker, l2 }, l2Grid: [l2] })
 }
 

@@ -1,13 +1,15 @@
-// Choosing the ranker's regularization from the training tables alone: a deterministic held-out slice
-// of the tables is predicted under each candidate strength, and the best one is used for the final model.
+// Choosing the ranker's regularization from the training tables alone, by deterministic cross-validation
+// over the tables, for small lexicons (where the right strength matters most and the choice is cheap).
 import type { Lexicon } from '../lexicon/lexicon.ts'
 import type { InflectionModel, LearnOptions } from './learn.ts'
 import { predictLemma } from './predict.ts'
 
-/** Share of tables held out for choosing the regularization (common practice: one tenth). */
-const HOLDOUT_SHARE = 0.1
+/** Folds of the cross-validation that chooses the regularization (common practice: a few). */
+const FOLDS = 3
 /** Below this many tables there is too little to hold out; the first candidate is used. */
 const MIN_TABLES = 60
+/** Above this many tables the choice costs too much learning time; the first candidate is used. */
+export const MAX_TUNED_TABLES = 1000
 
 /** A stable 32-bit hash (FNV-1a) of a string, for deterministic splits. */
 export function stableHash(s: string): number {
@@ -20,7 +22,7 @@ export function stableHash(s: string): number {
 }
 
 /**
- * Pick the L2 strength among `grid` that predicts held-out training tables best (cells right, then tables).
+ * Pick the L2 strength among `grid` that predicts held-out training tables best (share of cells right).
  * `learn` is the learner itself, passed in so this module does not depend on it.
  * @example chooseL2(lexicon, options, [1e-3, 1e-2], learnOnce) // 0.01
  */
@@ -31,23 +33,23 @@ export function chooseL2(
   learn: (lex: Lexicon, options: LearnOptions) => InflectionModel,
 ): number {
   const tables = lex.entries.filter((e) => e.cells)
-  if (grid.length === 1 || tables.length < MIN_TABLES) return grid[0]!
-  const isHeld = (lemma: string) => stableHash(lemma) % 1000 < HOLDOUT_SHARE * 1000
-  const train: Lexicon = { ...lex, entries: lex.entries.filter((e) => !(e.cells && isHeld(e.lemma))) }
-  const held = tables.filter((e) => isHeld(e.lemma))
+  if (grid.length === 1 || tables.length < MIN_TABLES || tables.length > MAX_TUNED_TABLES) return grid[0]!
+  const fold = (lemma: string) => stableHash(lemma) % FOLDS
   let best = grid[0]!
   let bestScore = -1
   for (const l2 of grid) {
-    // The whole-table ranker alone is enough to compare strengths, and much cheaper than the cell rankers.
-    const combine = { ...options.combine, cellWeight: 0, cellMix: 0 }
-    const model = learn(train, { ...options, combine, ranker: { ...options.ranker, l2 } })
     let right = 0
     let cells = 0
-    for (const e of held) {
-      const predicted = new Map(predictLemma(model, e.lemma, e.upos, e.inherent).cells.map((c) => [c.key, c.forms[0]?.form]))
-      for (const c of e.cells!) {
-        cells++
-        if (c.forms.includes(predicted.get(c.key) ?? '')) right++
+    for (let k = 0; k < FOLDS; k++) {
+      const train: Lexicon = { ...lex, entries: lex.entries.filter((e) => !(e.cells && fold(e.lemma) === k)) }
+      const model = learn(train, { ...options, ranker: { ...options.ranker, l2 } })
+      for (const e of tables) {
+        if (fold(e.lemma) !== k) continue
+        const predicted = new Map(predictLemma(model, e.lemma, e.upos, e.inherent).cells.map((c) => [c.key, c.forms[0]?.form]))
+        for (const c of e.cells!) {
+          cells++
+          if (c.forms.includes(predicted.get(c.key) ?? '')) right++
+        }
       }
     }
     const score = cells ? right / cells : 0
