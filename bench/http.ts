@@ -1,5 +1,6 @@
 // npm run bench:http — loopback load: GET /v1/analyze against the GET /health floor, under Node and wrangler dev.
-// Options: --seconds N (default 10), --connections N (default 10), --no-wrangler (Node only). 127.0.0.1 only.
+// Options: --seconds N per route (default 10), --connections N (default 10), --no-wrangler (Node only). 127.0.0.1 only.
+// The two routes alternate in rounds of 2 s, so a change in machine load falls on both alike.
 import { type ChildProcess, spawn } from 'node:child_process'
 import { readFileSync } from 'node:fs'
 import { fileURLToPath } from 'node:url'
@@ -25,9 +26,14 @@ const CONNECTIONS = option('--connections', 10)
 
 /** Word forms of the demo corpus (attested, predicted and unknown ones, as running text has them). */
 function corpusForms(limit: number): string[] {
-  const text = readFileSync(`${root}demo-lexicon/corpus.txt`, 'utf8')
-  const words = [...new Intl.Segmenter(undefined, { granularity: 'word' }).segment(text)].filter((s) => s.isWordLike)
-  return words.slice(0, limit).map((s) => s.segment)
+  const segmenter = new Intl.Segmenter(undefined, { granularity: 'word' })
+  const forms: string[] = []
+  // Line by line: a segment of one long string carries a copy of that string.
+  for (const line of readFileSync(`${root}demo-lexicon/corpus.txt`, 'utf8').split('\n')) {
+    for (const s of segmenter.segment(line)) if (s.isWordLike && forms.length < limit) forms.push(s.segment)
+    if (forms.length >= limit) break
+  }
+  return forms
 }
 
 /** Start a server process and wait until its /health answers. */
@@ -49,18 +55,40 @@ async function startServer(command: string, argv: string[], url: string, env: No
   throw new Error(`${url} did not answer within 60 s: ${stderr}`)
 }
 
-function load(url: string, paths: string[]): Promise<LoadResult> {
+const ROUND_SECONDS = 2
+
+function load(url: string, paths: string[], seconds: number): Promise<LoadResult> {
   let i = 0
   const requests = [{ setupRequest: (req: { path: string }) => ({ ...req, path: paths[i++ % paths.length] }) }]
-  return autocannon({ url, connections: CONNECTIONS, duration: SECONDS, requests }) as Promise<LoadResult>
+  return autocannon({ url, connections: CONNECTIONS, duration: seconds, requests }) as Promise<LoadResult>
 }
 
-/** Both loads against one server, the floor first; returns a row per route and the ratio. */
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!
+
+/** Rounds summed: mean throughput over all rounds, the median round's p50 and p99, all errors. */
+function combine(rounds: LoadResult[]): LoadResult {
+  return {
+    requests: { average: rounds.reduce((n, r) => n + r.requests.average, 0) / rounds.length },
+    latency: { p50: median(rounds.map((r) => r.latency.p50)), p99: median(rounds.map((r) => r.latency.p99)) },
+    errors: rounds.reduce((n, r) => n + r.errors, 0),
+    timeouts: rounds.reduce((n, r) => n + r.timeouts, 0),
+    non2xx: rounds.reduce((n, r) => n + r.non2xx, 0),
+  }
+}
+
+/** Both loads against one server, alternating; returns a row per route and the throughput ratio. */
 async function measure(label: string, url: string, forms: string[]) {
   const analyze = forms.map((f) => `/v1/analyze?form=${encodeURIComponent(f)}`)
-  await load(url, ['/health']).catch(() => undefined) // warm-up, not counted
-  const health = await load(url, ['/health'])
-  const lookups = await load(url, analyze)
+  await load(url, ['/health'], 1) // warm-up, not counted
+  await load(url, analyze, 2) // warm-up: the forms' first analyses fill the lookup caches
+  const healthRounds: LoadResult[] = []
+  const analyzeRounds: LoadResult[] = []
+  for (let r = 0; r < Math.max(1, Math.round(SECONDS / ROUND_SECONDS)); r++) {
+    healthRounds.push(await load(url, ['/health'], ROUND_SECONDS))
+    analyzeRounds.push(await load(url, analyze, ROUND_SECONDS))
+  }
+  const health = combine(healthRounds)
+  const lookups = combine(analyzeRounds)
   const row = (route: string, r: LoadResult) => ({
     target: label,
     route,
