@@ -5,7 +5,6 @@ import { CandidateFinder } from './candidates.ts'
 import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
-import { chooseL2 } from './tune.ts'
 import { DEFAULT_RANKER_OPTIONS, type RankerExample, type RankerOptions, type RankerWeights, trainRanker } from './ranker.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
@@ -25,14 +24,11 @@ export interface LearnOptions {
   features: FeatureOptions
   ranker: RankerOptions
   combine: CombineOptions
-  /** Candidate L2 strengths, chosen on held-out training tables (two or more); otherwise ranker.l2 is used. */
-  l2Grid: number[]
 }
 
 export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
   features: DEFAULT_FEATURE_OPTIONS,
   ranker: DEFAULT_RANKER_OPTIONS,
-  l2Grid: [3e-3, 1e-2],
   combine: { cellWeight: 10, tableFloor: 0.001, cellFloor: 0.001, meanPower: 1, cellMix: 0.5 },
 }
 
@@ -56,13 +52,8 @@ export function learnInflection(entries: Iterable<Entry>, options: LearnOptions 
   return learnFromLexicon(lexicon, options)
 }
 
-/** As learnInflection, from a lexicon already built; the L2 strength is chosen first when a grid is given. */
+/** As learnInflection, from a lexicon already built. */
 export function learnFromLexicon(lexicon: Lexicon, options: LearnOptions = DEFAULT_LEARN_OPTIONS): InflectionModel {
-  const l2 = options.l2Grid.length > 1 ? chooseL2(lexicon, options, options.l2Grid, learnOnce) : options.ranker.l2
-  return learnOnce(lexicon, { ...options, ranker: { ...options.ranker, l2 }, l2Grid: [l2] })
-}
-
-function learnOnce(lexicon: Lexicon, options: LearnOptions): InflectionModel {
   const book = extractParadigms(lexicon)
   const members: string[][] = book.paradigms.map(() => [])
   book.memberOf.forEach((p, i) => {
