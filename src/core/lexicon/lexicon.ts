@@ -19,7 +19,7 @@ export interface LexEntry {
 
 export interface Lexicon {
   entries: LexEntry[]
-  /** UPOS → cell keys in order of first appearance. */
+  /** UPOS → cell keys, sorted as FEATS are (case-insensitive). */
   cellKeys: Record<string, string[]>
   /** UPOS → the features that vary within some table of that UPOS (the inflectional ones). */
   inflectional: Record<string, string[]>
@@ -33,7 +33,9 @@ export interface Lexicon {
  *   constant over a table and not inflectional are its inherent features (so a noun with no plural keeps
  *   Number in its cells);
  * - two JSON entries giving different tables for the same lemma are both kept (their rows are unioned)
- *   and reported as a `conflict`, so nothing is lost silently.
+ *   and reported as a `conflict`, so nothing is lost silently;
+ * - the order is canonical (entries by UPOS then lemma, cells by FEATS; variants keep the source's order),
+ *   so reordering input rows never changes the result.
  * @example buildLexicon([{lemma:'Aal',upos:'NOUN',feats:'_'}]).entries[0].cells // null
  */
 export function buildLexicon(input: Iterable<Entry>): Lexicon {
@@ -111,9 +113,20 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
     }
     entries.push({ lemma: entry.lemma, upos: entry.upos, inherent: formatFeats(inherent), cells })
   }
+  // Canonical order, so the order of input rows never changes a model: entries by UPOS then lemma (code
+  // points), cells by their FEATS (UD order); variant forms keep the source's order (its preference).
+  entries.sort((a, b) => cmp(a.upos, b.upos) || cmp(a.lemma, b.lemma))
+  for (const e of entries) e.cells?.sort((a, b) => compareFeatureKeys(a.key, b.key))
+  for (const upos of Object.keys(cellKeys)) cellKeys[upos]!.sort(compareFeatureKeys)
+  const sortedCellKeys: Record<string, string[]> = {}
+  for (const upos of Object.keys(cellKeys).sort(cmp)) sortedCellKeys[upos] = cellKeys[upos]!
   const inflectional: Record<string, string[]> = {}
   for (const [upos, set] of varying) inflectional[upos] = [...set].sort(compareFeatureKeys)
-  return { entries, cellKeys, inflectional, problems }
+  return { entries, cellKeys: sortedCellKeys, inflectional, problems }
+}
+
+function cmp(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0
 }
 
 function sameRows(a: { form: string; feats: string }[], b: { form: string; feats: string }[]): boolean {

@@ -33,13 +33,17 @@ describe('extractParadigms', () => {
     const model = learnInflection(rowsToEntries(rows))
     const t = expandLemma(model, 'kochen', 'VERB')!
     expect(t.source).toBe('predicted')
-    expect(t.forms.map((f) => f.form)).toEqual(['kochen', 'koche', 'gekocht'])
+    expect(t.forms.map((f) => [f.cell, f.form])).toEqual([
+      [CELLS[1], 'koche'],
+      [CELLS[2], 'gekocht'],
+      [CELLS[0], 'kochen'],
+    ])
   })
 
   it('gives an attested table back unchanged', () => {
     const model = learnInflection(rowsToEntries(rows))
     const t = expandLemma(model, 'legen', 'VERB')!
     expect(t.source).toBe('attested')
-    expect(t.forms.map((f) => f.form)).toEqual(['legen', 'lege'])
+    expect(t.forms.map((f) => f.form)).toEqual(['lege', 'legen'])
   })
 })

@@ -16,19 +16,24 @@ const rows = [
 describe('buildLexicon', () => {
   const lex = buildLexicon(rowsToEntries(rows))
 
+  it('orders entries by lemma and cells by FEATS, whatever the input order', () => {
+    expect(lex.entries.map((e) => e.lemma)).toEqual(['Milch', 'Tag'])
+    expect(buildLexicon(rowsToEntries([...rows].reverse()))).toEqual(lex)
+  })
+
   it('finds inherent features constant over a table', () => {
-    expect(lex.entries[0]!.inherent).toBe('Gender=Masc')
-    expect(lex.entries[0]!.cells!.map((c) => c.key)).toEqual([
-      'Case=Nom|Number=Sing',
+    expect(lex.entries[1]!.inherent).toBe('Gender=Masc')
+    expect(lex.entries[1]!.cells!.map((c) => c.key)).toEqual([
+      'Case=Dat|Number=Plur',
       'Case=Gen|Number=Sing',
       'Case=Nom|Number=Plur',
-      'Case=Dat|Number=Plur',
+      'Case=Nom|Number=Sing',
     ])
   })
 
   it('keeps Number in the cells of a noun with no plural', () => {
-    expect(lex.entries[1]!.inherent).toBe('Gender=Fem')
-    expect(lex.entries[1]!.cells!.map((c) => c.key)).toEqual(['Case=Nom|Number=Sing', 'Case=Gen|Number=Sing'])
+    expect(lex.entries[0]!.inherent).toBe('Gender=Fem')
+    expect(lex.entries[0]!.cells!.map((c) => c.key)).toEqual(['Case=Gen|Number=Sing', 'Case=Nom|Number=Sing'])
     expect(lex.inflectional.NOUN).toEqual(['Case', 'Number'])
   })
 
