@@ -25,6 +25,19 @@ export function describeRoutes(target: () => RouteTarget): void {
       expect(((await res.json()) as { status: string }).status).toBe('ok')
     })
 
+    it('lets other origins send reads, not writes (preflights)', async () => {
+      const preflight = (method: string) =>
+        target().fetch('/v1/analyze', {
+          method: 'OPTIONS',
+          headers: { origin: 'https://elsewhere.example', 'access-control-request-method': method },
+        })
+      const read = await preflight('POST')
+      expect(read.headers.get('access-control-allow-origin')).toBe('*')
+      expect(read.headers.get('access-control-allow-methods')).toBe('GET,HEAD,POST')
+      const write = await preflight('PUT')
+      expect(write.headers.get('access-control-allow-origin')).toBeNull()
+    })
+
     it('analyzes an attested form (lokka, Acc.Sg lokan: demo-lexicon/README.md)', async () => {
       const res = await target().fetch('/v1/analyze?form=lokan')
       expect(res.headers.get('formfold-model')).toBe('demo')
