@@ -14,7 +14,10 @@ function keyWithout(parsed, name) {
   return rest.length ? rest.join('|') : '_';
 }
 
-/** The forms of a table grouped by cell, in the table's order. */
+/**
+ * The forms of a table grouped by cell, in the table's order except that the citation cell (the one whose
+ * form is the lemma) comes first, so its row and column lead the grid (Nom and Sing, or the infinitive).
+ */
 function cellsOf(table) {
   const cells = [];
   const byKey = new Map();
@@ -23,6 +26,8 @@ function cellsOf(table) {
     if (!cell) { cell = { key: f.cell, forms: [] }; byKey.set(f.cell, cell); cells.push(cell); }
     cell.forms.push(f);
   }
+  const citation = cells.findIndex((c) => c.forms.some((f) => f.form === table.lemma));
+  if (citation > 0) cells.unshift(cells.splice(citation, 1)[0]);
   return cells;
 }
 

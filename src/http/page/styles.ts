@@ -52,6 +52,7 @@ main { display: grid; grid-template-columns: minmax(0, 1fr) minmax(0, 1fr); gap:
 .step { display: inline-grid; place-items: center; width: 1.9rem; height: 1.9rem; border: 2px solid var(--ink); border-radius: 50%;
   font-size: 1rem; font-family: var(--serif); background: var(--paper); }
 .hint { margin: 0 0 .8rem; color: var(--ink-soft); }
+#search-results, #table-results, .pane-detail, #coverage-results { overflow-x: auto; }
 
 .controls { display: flex; flex-wrap: wrap; align-items: center; gap: .5rem .6rem; margin: 0 0 .6rem; }
 .controls label { font-weight: 600; }
