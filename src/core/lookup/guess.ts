@@ -1,0 +1,202 @@
+// The guesser: analyses of a form no table lists, by reversing cell patterns and checking forward.
+// A form's candidate lemmas come from reversed rewrites, weighed by how often each rewrite made forms with
+// this ending; each is then inflected forward by the ranker: P(lemma | form) ∝ P(rewrite | ending) ·
+// P(form ∈ table(lemma))^forward · the dictionary's preferences (listed lemmas, capitalization per UPOS).
+import { lemmaFeatures } from '../inflect/features.ts'
+import { fillPattern } from '../inflect/pattern.ts'
+import { type PredictedTable, predictTables } from '../inflect/predict.ts'
+import { scoreCandidates } from '../inflect/ranker.ts'
+import { entryKey } from '../lexicon/entry.ts'
+import { mergeFeats } from '../lexicon/feats.ts'
+import {
+  BoundedCache,
+  isCapitalized,
+  type LookupContext,
+  type LookupModel,
+  lookupContext,
+} from './lookup-context.ts'
+
+/** One guessed analysis; `score` estimates P(this analysis | form). */
+export interface GuessedAnalysis {
+  lemma: string
+  upos: string
+  feats: string
+  score: number
+  paradigm: string | null
+}
+
+export interface GuessOptions {
+  /** Candidate lemmas checked with the fast ranker (the most supported reversals). */
+  hypotheses: number
+  /** Candidate lemmas whose tables are predicted in full (at most this many lemmas are answered). */
+  lemmas: number
+  /** Lemmas are answered, best first, until their probabilities add up to this much. */
+  mass: number
+  /** How much more likely a lemma the dictionary lists (without a table) is than an unknown one. */
+  listedBoost: number
+  /** Exponent of the forward check P(form ∈ table(lemma)) beside the rewrite prior (0: ignore it). */
+  forward: number
+}
+
+export const DEFAULT_GUESS_OPTIONS: GuessOptions = {
+  hypotheses: 12,
+  lemmas: 3,
+  mass: 0.9,
+  listedBoost: 20,
+  forward: 1,
+}
+
+interface QuickFit {
+  cands: { paradigm: number; stems: string[]; prob: number }[]
+}
+
+const quickCaches = new WeakMap<LookupContext, BoundedCache<QuickFit>>()
+
+/** A spelling to guess from, and how it was derived from the token. */
+export interface GuessKey {
+  key: string
+  how: string
+}
+
+/**
+ * Guess the analyses of a token from one or more spellings of it (its case variants compete in one
+ * distribution, so the dictionary's capitalization decides between them): best first, each with
+ * P(analysis | token) and the spelling it came from; those below `floor` are dropped.
+ * @example guessForm(model, [{ key: 'Mänteln', how: 'exact' }])[0] // { lemma: 'Mantel', feats: 'Case=Dat|Number=Plur', score: 0.9, ... }
+ */
+export function guessForm(
+  model: LookupModel,
+  keys: readonly GuessKey[],
+  floor = 0,
+  opts: GuessOptions = DEFAULT_GUESS_OPTIONS,
+): (GuessedAnalysis & { how: string })[] {
+  const ctx = lookupContext(model)
+  const hyps = keys.flatMap((k) =>
+    ctx.reverse.hypotheses(k.key).map((h) => {
+      const key = entryKey(h.lemma, h.upos)
+      const cap = ctx.capitalShare.get(h.upos) ?? 0.5
+      const prior =
+        h.prior * (ctx.listed.has(key) ? opts.listedBoost : 1) * (isCapitalized(h.lemma) ? cap : 1 - cap)
+      return { ...h, form: k.key, how: k.how, inherent: ctx.listed.get(key) ?? '_', prior, weight: 0 }
+    }),
+  )
+  hyps.sort(
+    (a, b) => b.prior - a.prior || cmp(a.lemma, b.lemma) || cmp(a.upos, b.upos) || cmp(a.form, b.form),
+  )
+  const weighed = hyps.slice(0, opts.hypotheses).filter((h) => {
+    const q = quickFit(model, ctx, h.lemma, h.upos, h.inherent)
+    let inTable = 0
+    for (const c of q.cands) if (madeBy(model, c.paradigm, c.stems, h.form)) inTable += c.prob
+    h.weight = h.prior * inTable ** opts.forward
+    return inTable > 0
+  })
+  weighed.sort(
+    (a, b) => b.weight - a.weight || cmp(a.lemma, b.lemma) || cmp(a.upos, b.upos) || cmp(a.form, b.form),
+  )
+  // The few best lemmas are inflected in full, so a guess agrees with what expanding that lemma gives;
+  // a form only improbable tables make falls back to the fast ranker's view of the cells.
+  const cells = weighed.slice(0, opts.lemmas).map((w) => {
+    const key = entryKey(w.lemma, w.upos)
+    const tables =
+      ctx.tables.get(key) ??
+      ctx.tables.set(key, predictTables(model.inflection, w.lemma, w.upos, w.inherent, 32))
+    let { marginal, inTable } = formCells(tables, w.form)
+    if (inTable <= 0) {
+      const paradigms = model.inflection.book.paradigms
+      const quick = quickFit(model, ctx, w.lemma, w.upos, w.inherent).cands.map((c) => {
+        const p = paradigms[c.paradigm]!
+        return {
+          paradigm: p.id,
+          score: c.prob,
+          cells: p.cells.map((x) => ({ key: x.key, forms: x.forms.map((f) => fillPattern(f, c.stems)) })),
+        }
+      })
+      ;({ marginal, inTable } = formCells(quick, w.form))
+    }
+    return { w, marginal, inTable }
+  })
+  const z = weighed.reduce((a, w) => a + w.weight, 0)
+  cells.sort((a, b) => b.w.weight - a.w.weight || cmp(a.w.lemma, b.w.lemma) || cmp(a.w.upos, b.w.upos))
+  const out: (GuessedAnalysis & { how: string })[] = []
+  let mass = 0
+  for (const { w, marginal, inTable } of cells) {
+    if (inTable <= 0 || mass >= opts.mass) break
+    mass += w.weight / z
+    const has = ctx.attested.get(entryKey(w.lemma, w.upos))
+    for (const [cell, m] of marginal) {
+      if (has?.has(cell)) continue
+      const score = Math.round((w.weight / z) * Math.min(1, m.score / inTable) * 1e4) / 1e4
+      if (score < floor || score <= 0) continue
+      out.push({
+        lemma: w.lemma,
+        upos: w.upos,
+        feats: mergeFeats(w.inherent, cell),
+        score,
+        paradigm: m.paradigm,
+        how: w.how,
+      })
+    }
+  }
+  return out
+}
+
+/** Where a form sits in scored tables: per cell, the tables' summed score and the best one's paradigm. */
+function formCells(
+  tables: readonly PredictedTable[],
+  form: string,
+): { marginal: Map<string, { score: number; paradigm: string }>; inTable: number } {
+  const marginal = new Map<string, { score: number; paradigm: string }>()
+  let inTable = 0
+  for (const t of tables) {
+    let here = false
+    for (const c of t.cells) {
+      if (!c.forms.includes(form)) continue
+      here = true
+      const m = marginal.get(c.key)
+      if (m) m.score += t.score
+      else marginal.set(c.key, { score: t.score, paradigm: t.paradigm })
+    }
+    if (here) inTable += t.score
+  }
+  return { marginal, inTable }
+}
+
+function cmp(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0
+}
+
+function quickFit(
+  model: LookupModel,
+  ctx: LookupContext,
+  lemma: string,
+  upos: string,
+  inherent: string,
+): QuickFit {
+  let cache = quickCaches.get(ctx)
+  if (!cache) {
+    cache = new BoundedCache<QuickFit>(16384)
+    quickCaches.set(ctx, cache)
+  }
+  const key = `${lemma}\t${upos}\t${inherent}`
+  const hit = cache.get(key)
+  if (hit) return hit
+  const inf = model.inflection
+  const found = inf.finder.find(lemma, upos)
+  const probs =
+    found.length === 0
+      ? []
+      : scoreCandidates(
+          inf.weights,
+          lemmaFeatures(lemma, inherent, inf.options.features),
+          found.map((c) => c.paradigm),
+          found.map((c) => c.shared),
+        )
+  const cands = found.map((c, i) => ({ paradigm: c.paradigm, stems: c.stems, prob: probs[i]! }))
+  return cache.set(key, { cands })
+}
+
+function madeBy(model: LookupModel, paradigm: number, stems: string[], form: string): boolean {
+  for (const c of model.inflection.book.paradigms[paradigm]!.cells)
+    for (const f of c.forms) if (fillPattern(f, stems) === form) return true
+  return false
+}

@@ -1,0 +1,80 @@
+// What analysis needs besides the index, derived once per model: reversed rules, dictionary facts, caches.
+import type { InflectionModel } from '../inflect/learn.ts'
+import type { PredictedTable } from '../inflect/predict.ts'
+import { entryKey } from '../lexicon/entry.ts'
+import type { FormIndex } from './form-index.ts'
+import { ReverseRules } from './reverse-rules.ts'
+
+/** What analysis reads: the inflection model (paradigms, rankers, lexicon) and the form index. */
+export interface LookupModel {
+  inflection: InflectionModel
+  index: FormIndex
+}
+
+/** A bounded map that forgets the least recently set key first. */
+export class BoundedCache<V> {
+  private readonly map = new Map<string, V>()
+  constructor(private readonly limit: number) {}
+
+  get(key: string): V | undefined {
+    return this.map.get(key)
+  }
+
+  set(key: string, value: V): V {
+    if (this.map.size >= this.limit) this.map.delete(this.map.keys().next().value!)
+    this.map.set(key, value)
+    return value
+  }
+}
+
+/** Dictionary facts and caches for one model. */
+export interface LookupContext {
+  reverse: ReverseRules
+  /** (lemma, upos) of each bare lemma the dictionary lists → its inherent features. */
+  listed: Map<string, string>
+  /** (lemma, upos) of each entry with a table → the cells it has. */
+  attested: Map<string, Set<string>>
+  /** Per UPOS: the share of its lemmas that start with a capital (smoothed). */
+  capitalShare: Map<string, number>
+  tables: BoundedCache<PredictedTable[]>
+}
+
+const contexts = new WeakMap<InflectionModel, LookupContext>()
+const CACHE_LIMIT = 4096
+
+/**
+ * The lookup context of a model, built on first use.
+ * @example lookupContext(model).listed.has('Mantel\tNOUN') // true for a bare lemma of the dictionary
+ */
+export function lookupContext(model: LookupModel): LookupContext {
+  let ctx = contexts.get(model.inflection)
+  if (ctx) return ctx
+  const listed = new Map<string, string>()
+  const attested = new Map<string, Set<string>>()
+  const caps = new Map<string, [number, number]>()
+  for (const e of model.inflection.lexicon.entries) {
+    const key = entryKey(e.lemma, e.upos)
+    if (e.cells) attested.set(key, new Set(e.cells.map((c) => c.key)))
+    else listed.set(key, e.inherent)
+    const c = caps.get(e.upos) ?? [0, 0]
+    if (isCapitalized(e.lemma)) c[0]++
+    c[1]++
+    caps.set(e.upos, c)
+  }
+  const capitalShare = new Map([...caps].map(([u, [cap, n]]) => [u, (cap + 1) / (n + 2)]))
+  ctx = {
+    reverse: new ReverseRules(model.inflection),
+    listed,
+    attested,
+    capitalShare,
+    tables: new BoundedCache(CACHE_LIMIT),
+  }
+  contexts.set(model.inflection, ctx)
+  return ctx
+}
+
+/** Does the word start with an upper-case letter? */
+export function isCapitalized(word: string): boolean {
+  const first = word.charAt(0)
+  return first !== first.toLowerCase()
+}

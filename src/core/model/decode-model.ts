@@ -1,0 +1,98 @@
+// Reading a model file: check format and version, rebuild the inflection model and the form index.
+import { CandidateFinder } from '../inflect/candidates.ts'
+import type { InflectionModel } from '../inflect/learn.ts'
+import type { LexEntry } from '../lexicon/lexicon.ts'
+import { type Problem, ProblemError } from '../lexicon/problem.ts'
+import { assembleModel } from './build-model.ts'
+import { decodeCellRules } from './cell-rules-codec.ts'
+import { MODEL_FORMAT, MODEL_VERSION, type ModelJson } from './encode-model.ts'
+import type { KeptTable, Model } from './model.ts'
+import { decodeParadigm } from './paradigm-codec.ts'
+import { decodeTable } from './table-codec.ts'
+import { decodeWeights } from './weights-codec.ts'
+
+/**
+ * Read a model file, or say why not (code `bad-model`): not JSON, not a formfold model, a newer major
+ * version than this reader, or contents that do not fit together.
+ * @example readModel(text).ok // true
+ */
+export function readModel(text: string): { ok: true; model: Model } | { ok: false; problem: Problem } {
+  try {
+    return { ok: true, model: decodeModel(text) }
+  } catch (err) {
+    if (err instanceof ProblemError) return { ok: false, problem: err.problem }
+    return { ok: false, problem: { code: 'bad-model', message: `model file: ${(err as Error).message}` } }
+  }
+}
+
+/**
+ * Read a model file; throws `ProblemError` (code `bad-model`) where `readModel` returns the problem.
+ * @example decodeModel(encodeModel(model)).index.formCount === model.index.formCount // true
+ */
+export function decodeModel(text: string): Model {
+  let json: ModelJson
+  try {
+    json = JSON.parse(text)
+  } catch {
+    throw bad('not JSON')
+  }
+  checkHeader(json)
+  const cellsOf = (u: string) => json.cellKeys[u] ?? []
+  const paradigms = json.paradigms.map((p) => decodeParadigm(p, cellsOf(p.upos)))
+  const entries: LexEntry[] = []
+  const memberOf: number[] = []
+  const kept: (KeptTable[] | null)[] = []
+  for (const [lemma, u, f, table] of json.entries) {
+    const upos = json.upos[u]
+    const inherent = json.feats[f]
+    if (typeof lemma !== 'string' || upos === undefined || inherent === undefined)
+      throw bad(`bad entry ${lemma}`)
+    const t = decodeTable(lemma, table, paradigms, cellsOf(upos))
+    if ('kept' in t) {
+      entries.push({ lemma, upos, inherent, cells: null })
+      memberOf.push(-1)
+      kept.push(t.kept)
+    } else {
+      entries.push({ lemma, upos, inherent, cells: t.cells })
+      memberOf.push(t.paradigm)
+      kept.push(null)
+    }
+  }
+  // The finder is rebuilt exactly as learning builds it: each paradigm's member lemmas, in entry order.
+  const members: string[][] = paradigms.map(() => [])
+  memberOf.forEach((p, i) => {
+    if (p >= 0) members[p]!.push(entries[i]!.lemma)
+  })
+  const inflection: InflectionModel = {
+    lexicon: { entries, cellKeys: json.cellKeys, inflectional: json.inflectional, problems: [] },
+    book: { paradigms, memberOf },
+    weights: decodeWeights(json.weights),
+    finder: new CandidateFinder(paradigms, members),
+    cells: (json.cellRules ?? []).map((c) => decodeCellRules(c, entries, cellsOf(c.upos))),
+    options: json.options.learn,
+  }
+  const { tablesPerLemma, tableFloor, weightDecimals, learn } = json.options
+  return assembleModel(inflection, kept, { tablesPerLemma, tableFloor, weightDecimals, learn })
+}
+
+function checkHeader(json: ModelJson): void {
+  if (!json || typeof json !== 'object' || json.format !== MODEL_FORMAT)
+    throw bad(`not a ${MODEL_FORMAT} file`)
+  const major = Number(String(json.version).split('.')[0])
+  const ours = Number(MODEL_VERSION.split('.')[0])
+  if (!Number.isInteger(major)) throw bad(`unreadable version "${json.version}"`)
+  if (major > ours) {
+    throw bad(
+      `format version ${json.version} is newer than this reader (${MODEL_VERSION}); upgrade formfold to read it`,
+    )
+  }
+  if (major < ours)
+    throw bad(`format version ${json.version} is older than ${MODEL_VERSION}; learn the model again`)
+  for (const k of ['upos', 'feats', 'paradigms', 'entries'] as const)
+    if (!Array.isArray(json[k])) throw bad(`missing "${k}"`)
+  if (!json.weights || !json.options || !json.cellKeys) throw bad('missing weights, options or cellKeys')
+}
+
+function bad(message: string): ProblemError {
+  return new ProblemError({ code: 'bad-model', message: `model file: ${message}` })
+}

@@ -1,0 +1,112 @@
+// Tables in the model file: an attested table as the paradigm that reproduces it, raw forms otherwise.
+import { applyParadigm, matchAll, type Paradigm } from '../inflect/paradigm.ts'
+import { fillPattern } from '../inflect/pattern.ts'
+import type { Cell, LexEntry } from '../lexicon/lexicon.ts'
+import { ProblemError } from '../lexicon/problem.ts'
+import { type KeptTable, sameCells } from './model.ts'
+
+/** A cell reference: the index of its key in the UPOS's cell list (or the key itself if it is not listed). */
+type CellRef = number | string
+/** Raw cells: `[cell, form, form…]` per cell, in the table's order. */
+export type RawCells = [CellRef, ...string[]][]
+
+/**
+ * The table slot of an entry record (see FORMAT.md): `p` (paradigm p applied to the lemma gives the table),
+ * `{p, s}` (paradigm p with these stems), `{p, f}` (raw cells; p = its paradigm or -1), or for a bare lemma
+ * the array of kept tables `[p, score×10⁴]` / `[p, score×10⁴, rawCells]`.
+ */
+export type TableJson =
+  | number
+  | { p: number; s: string[] }
+  | { p: number; f: RawCells }
+  | ([number, number] | [number, number, RawCells])[]
+
+/** Encode the table of an attested entry, the most compact way that reproduces it exactly. */
+export function encodeAttested(
+  e: LexEntry,
+  p: number,
+  paradigms: readonly Paradigm[],
+  cellKeys: readonly string[],
+): TableJson {
+  const cells = e.cells!
+  const par = paradigms[p]
+  if (par) {
+    const forms = applyParadigm(par, e.lemma)
+    if (
+      forms &&
+      sameCells(
+        cells,
+        par.cells.map((c, i) => ({ key: c.key, forms: forms[i]! })),
+      )
+    )
+      return p
+    for (const stems of matchAll(par.lemma, par.openPrefix, e.lemma)) {
+      const filled = par.cells.map((c) => ({ key: c.key, forms: c.forms.map((f) => fillPattern(f, stems)) }))
+      if (sameCells(cells, filled)) return { p, s: stems }
+    }
+  }
+  return { p: par ? p : -1, f: encodeCells(cells, cellKeys) }
+}
+
+/** Encode the kept tables of a bare lemma. */
+export function encodeKept(kept: readonly KeptTable[], cellKeys: readonly string[]): TableJson {
+  return kept.map((t) => {
+    const score = Math.round(t.score * 1e4)
+    return t.cells ? [t.paradigm, score, encodeCells(t.cells, cellKeys)] : [t.paradigm, score]
+  })
+}
+
+function encodeCells(cells: readonly Cell[], cellKeys: readonly string[]): RawCells {
+  return cells.map((c) => {
+    const i = cellKeys.indexOf(c.key)
+    return [i >= 0 ? i : c.key, ...c.forms]
+  })
+}
+
+/** What an entry's table slot decodes to: its cells and paradigm (attested) or its kept tables (bare lemma). */
+export type DecodedTable = { cells: Cell[]; paradigm: number } | { kept: KeptTable[] }
+
+/** Decode a table slot; a slot that does not fit its lemma throws a `bad-model` problem. */
+export function decodeTable(
+  lemma: string,
+  t: TableJson,
+  paradigms: readonly Paradigm[],
+  cellKeys: readonly string[],
+): DecodedTable {
+  if (Array.isArray(t)) {
+    return {
+      kept: t.map((k) => {
+        if (!paradigms[k[0]]) throw bad(`${lemma}: no paradigm ${k[0]}`)
+        return { paradigm: k[0], score: k[1] / 1e4, cells: k[2] ? decodeCells(k[2], cellKeys) : null }
+      }),
+    }
+  }
+  if (typeof t === 'number') {
+    const par = paradigms[t]
+    const forms = par && applyParadigm(par, lemma)
+    if (!par || !forms) throw bad(`${lemma}: paradigm ${t} does not apply`)
+    return { paradigm: t, cells: par.cells.map((c, i) => ({ key: c.key, forms: forms[i]! })) }
+  }
+  if (t && 's' in t && Array.isArray(t.s)) {
+    const par = paradigms[t.p]
+    if (!par) throw bad(`${lemma}: no paradigm ${t.p}`)
+    return {
+      paradigm: t.p,
+      cells: par.cells.map((c) => ({ key: c.key, forms: c.forms.map((f) => fillPattern(f, t.s)) })),
+    }
+  }
+  if (t && 'f' in t && Array.isArray(t.f)) return { paradigm: t.p, cells: decodeCells(t.f, cellKeys) }
+  throw bad(`${lemma}: unreadable table`)
+}
+
+function decodeCells(raw: RawCells, cellKeys: readonly string[]): Cell[] {
+  return raw.map(([ref, ...forms]) => {
+    const key = typeof ref === 'number' ? cellKeys[ref] : ref
+    if (key === undefined) throw bad(`no cell ${ref}`)
+    return { key, forms }
+  })
+}
+
+function bad(message: string): ProblemError {
+  return new ProblemError({ code: 'bad-model', message: `model file: ${message}` })
+}

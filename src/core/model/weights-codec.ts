@@ -1,0 +1,103 @@
+// Ranker weights in the model file: rounded to fixed decimals, stored sparsely as one base64 VLQ string.
+// Base64 VLQ is the integer encoding of Source Map Revision 3 (signed, 5 bits per character); `vlq` implements it.
+import { decode, encode } from 'vlq'
+import type { InflectionModel } from '../inflect/learn.ts'
+import type { RankerWeights } from '../inflect/ranker.ts'
+
+/**
+ * The file form. `features` sorted; `local` is, per feature in that order, the number of its classes and
+ * then (class − previous class, weight × scale) pairs; `shared` feature → weight × scale.
+ */
+export interface WeightsJson {
+  scale: number
+  features: string[]
+  local: string
+  shared: Record<string, number>
+}
+
+/**
+ * Round every weight to `decimals` places and drop those that become 0 (they change nothing).
+ * @example roundWeights({ local: new Map([['b\u00003', 0.123456]]), shared: new Map() }, 4).local.get('b\u00003') // 0.1235
+ */
+export function roundWeights(w: RankerWeights, decimals: number): RankerWeights {
+  const scale = 10 ** decimals
+  const round = (m: Map<string, number>) => {
+    const out = new Map<string, number>()
+    for (const [k, v] of m) {
+      const r = Math.round(v * scale)
+      if (r !== 0) out.set(k, r / scale)
+    }
+    return out
+  }
+  return { ...w, local: round(w.local), shared: round(w.shared) }
+}
+
+/**
+ * An inflection model with every weight rounded (the table ranker and each cell's rule ranker).
+ * @example roundModelWeights(learned, 3).weights.local.size <= learned.weights.local.size // true
+ */
+export function roundModelWeights(m: InflectionModel, decimals: number): InflectionModel {
+  return {
+    ...m,
+    weights: roundWeights(m.weights, decimals),
+    cells: m.cells.map((c) => ({ ...c, weights: roundWeights(c.weights, decimals) })),
+  }
+}
+
+/**
+ * Write rounded weights sparsely: features sorted, each feature's classes ascending and delta-coded.
+ * @example encodeWeights(w, 3).local // 'EGqBC…'
+ */
+export function encodeWeights(w: RankerWeights, decimals: number): WeightsJson {
+  const scale = 10 ** decimals
+  const byFeature = new Map<string, [number, number][]>()
+  for (const [k, v] of w.local) {
+    const cut = k.lastIndexOf('\u0000')
+    const f = k.slice(0, cut)
+    let list = byFeature.get(f)
+    if (!list) {
+      list = []
+      byFeature.set(f, list)
+    }
+    list.push([Number(k.slice(cut + 1)), Math.round(v * scale)])
+  }
+  const features = [...byFeature.keys()].sort(byCodeUnit)
+  const ints: number[] = []
+  for (const f of features) {
+    const list = byFeature.get(f)!.sort((a, b) => a[0] - b[0])
+    ints.push(list.length)
+    let prev = 0
+    for (const [c, v] of list) {
+      ints.push(c - prev, v)
+      prev = c
+    }
+  }
+  const shared: Record<string, number> = {}
+  for (const f of [...w.shared.keys()].sort(byCodeUnit)) shared[f] = Math.round(w.shared.get(f)! * scale)
+  return { scale, features, local: encode(ints), shared }
+}
+
+/**
+ * Read weights back; a weight is its integer divided by `scale`, which gives the rounded double exactly.
+ * @example decodeWeights(encodeWeights(w, 3)).local.get('s2:el\u00003') // 0.152
+ */
+export function decodeWeights(json: WeightsJson): RankerWeights {
+  const local = new Map<string, number>()
+  const ints = decode(json.local)
+  let at = 0
+  for (const f of json.features) {
+    const n = ints[at++]!
+    let c = 0
+    for (let k = 0; k < n; k++) {
+      c += ints[at++]!
+      local.set(`${f}\u0000${c}`, ints[at++]! / json.scale)
+    }
+  }
+  const shared = new Map<string, number>()
+  for (const f of Object.keys(json.shared)) shared.set(f, json.shared[f]! / json.scale)
+  return { local, shared }
+}
+
+function byCodeUnit(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0
+}
