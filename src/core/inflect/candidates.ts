@@ -15,6 +15,8 @@ export interface Candidate {
 export class CandidateFinder {
   private readonly byUpos = new Map<string, number[]>()
   private readonly suffixes: SuffixIndex[]
+  /** Per paradigm: what its cells put before the stem, as one signature shared by paradigms alike there. */
+  private readonly leftEdits: string[]
 
   constructor(
     readonly paradigms: readonly Paradigm[],
@@ -25,6 +27,7 @@ export class CandidateFinder {
       list.push(i)
       this.byUpos.set(p.upos, list)
     })
+    this.leftEdits = paradigms.map(leftEdits)
     this.suffixes = paradigms.map((_, i) => {
       const idx = new SuffixIndex()
       for (const m of memberLemmas[i] ?? []) idx.add(m.toLowerCase())
@@ -54,7 +57,12 @@ export class CandidateFinder {
       const stems = matchStems(p, lemma)
       if (!stems) continue
       const sfx = this.suffixes[i]!.longestShared(lower, memberOf === i)
-      out.push({ paradigm: i, stems, shared: this.sharedFeatures(p, sfx, stems, memberOf === i), sfx: sfx.length })
+      const shared = this.sharedFeatures(p, sfx, stems, memberOf === i)
+      // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
+      const left = this.leftEdits[i]!
+      shared.push(`L:${left}`)
+      for (let k = 1; k <= Math.min(4, lower.length - 3); k++) shared.push(`L:${left}|${lower.slice(0, k)}`)
+      out.push({ paradigm: i, stems, shared, sfx: sfx.length })
     }
     // Relative analogy: how this paradigm's longest shared suffix compares with the best candidate's.
     let best = 0
@@ -87,4 +95,20 @@ export class CandidateFinder {
     if (members <= 0) f.push('orphan')
     return f
   }
+}
+
+/** The literals a paradigm's forms have before their first stem letter, where they differ from the lemma's. */
+function leftEdits(p: Paradigm): string {
+  const first = p.openPrefix ? 1 : 0
+  const lead = (pt: readonly (string | number)[]) => {
+    const part = pt[first]
+    return typeof part === 'string' ? part : ''
+  }
+  const lemmaLead = lead(p.lemma)
+  const out: string[] = []
+  p.cells.forEach((c, i) => {
+    const f = c.forms[0]
+    if (f && lead(f) !== lemmaLead) out.push(`${i}=${lead(f)}`)
+  })
+  return out.join(',')
 }
