@@ -33,6 +33,9 @@ export const POINTER_TTL_MS = 5_000
 /** Decoded models kept per isolate (least recently used evicted first). */
 export const MAX_CACHED_MODELS = 8
 
+/** Analyze answers kept per model and option set (a model is immutable, so an answer never goes stale). */
+export const MAX_CACHED_ANSWERS = 20_000
+
 /**
  * All limits by name, for `/health` and the docs.
  * @example LIMITS.maxBatchForms // 1000

@@ -1,15 +1,14 @@
-// Decoded models kept per isolate, keyed by content hash, least recently used evicted first.
-import { MAX_CACHED_MODELS } from './limits.ts'
+// A bounded map that evicts the least recently used entry: decoded models, and answers of a model.
 
 /**
- * A small LRU. A key is a model file's SHA-256, so an entry can never go stale: the same hash is the same bytes.
- * @example const cache = new ModelCache<Model>(); cache.get(sha) ?? cache.set(sha, decode(bytes))
+ * A small LRU over a Map (whose iteration order is insertion order: the first key is the least recent).
+ * @example const cache = new LruCache<Model>(8); cache.get(sha) ?? cache.set(sha, decode(bytes))
  */
-export class ModelCache<M> {
+export class LruCache<M> {
   readonly #entries = new Map<string, M>()
   readonly #capacity: number
 
-  constructor(capacity = MAX_CACHED_MODELS) {
+  constructor(capacity: number) {
     this.#capacity = capacity
   }
 

@@ -1,7 +1,7 @@
 // Models by name: embedded ones (the demo) and published ones from the store, loaded once per isolate.
 import { ApiError } from './api-error.ts'
-import { MAX_MODEL_NAME_CHARS, POINTER_TTL_MS } from './limits.ts'
-import { ModelCache } from './model-cache.ts'
+import { MAX_CACHED_MODELS, MAX_MODEL_NAME_CHARS, POINTER_TTL_MS } from './limits.ts'
+import { LruCache } from './lru-cache.ts'
 import type { ModelStore, ModelSummary, Pointer, VersionInfo } from './store/model-store.ts'
 
 /** A model ready to answer, with the name and version it was asked by (`version` null: embedded). */
@@ -31,7 +31,7 @@ export interface ModelListing {
 export const MODEL_NAME = new RegExp(`^[a-z0-9][a-z0-9._-]{0,${MAX_MODEL_NAME_CHARS - 1}}$`)
 
 /** Decoded models shared by every registry of the isolate (keys are content hashes, so sharing is safe). */
-const decoded = new ModelCache<unknown>()
+const decoded = new LruCache<unknown>(MAX_CACHED_MODELS)
 
 /**
  * The models one app serves. A published model's pointer is re-read after `POINTER_TTL_MS`, so a publish

@@ -2,6 +2,7 @@
 // Expected analyses come from demo-lexicon/README.md (the demo language's documented classes) and its tables.tsv.
 import { describe, expect, it } from 'vitest'
 import { expandLemma } from '../../src/core/inflect/expand.ts'
+import { analyzeForm } from '../../src/core/lookup/analyze.ts'
 import { decodeModel } from '../../src/core/model/decode-model.ts'
 import { DEMO_MODEL_TEXT } from '../../src/http/demo-model.generated.ts'
 import { json, postJson, type RouteTarget } from './route-target.ts'
@@ -46,6 +47,18 @@ export function describeRoutes(target: () => RouteTarget): void {
       expect(status).toBe(200)
       expect(body.form).toBe('lokan')
       expect(body.candidates).toContainEqual(analysis('lokka', 'NOUN', 'Case=Acc|Gender=Fem|Number=Sing', 'attested'))
+    })
+
+    it('answers as the core does, the first time and from the cache', async () => {
+      const model = decodeModel(DEMO_MODEL_TEXT)
+      // Attested, case-folded, predicted, quoted and unknown forms of demo-lexicon/ (README, tables, lemmas).
+      for (const form of ['lokan', 'Kötit', 'baskerka', '"lokan"', 'velmoraš']) {
+        const want = JSON.parse(JSON.stringify(analyzeForm(model, form)))
+        for (let round = 0; round < 2; round++) {
+          const { status, body } = await json(await target().fetch(`/v1/analyze?form=${encodeURIComponent(form)}`))
+          expect([status, body]).toEqual([200, want])
+        }
+      }
     })
 
     it('names the model by a path segment as well as by ?model=', async () => {

@@ -1,9 +1,10 @@
 // `GET /v1/analyze?form=…` and `POST /v1/analyze {forms:[…]}`: candidate analyses of word forms.
 import { createRoute, type OpenAPIHono, z } from '@hono/zod-openapi'
+import type { TypedResponse } from 'hono'
 import { tooLarge } from '../api-error.ts'
 import type { AppEnv } from '../env.ts'
 import { MAX_BATCH_FORMS, MAX_BODY_BYTES, MAX_TOP } from '../limits.ts'
-import { analyze } from '../lookup.ts'
+import { analyzeJson } from '../lookup.ts'
 import { Candidate, errorResponses, Form, ModelQuery } from '../schemas/common.ts'
 import { jsonBody } from '../strict-input.ts'
 import { useModel } from '../use-model.ts'
@@ -16,8 +17,19 @@ const Options = {
 
 /** One form's answer: the form asked, the spelling that matched (after normalization), its candidates. */
 export const Analysis = z
-  .object({ form: z.string(), normalized: z.unknown(), candidates: z.array(Candidate) })
+  .object({
+    form: z.string(),
+    normalized: z.array(z.string()).openapi({ description: 'The spellings that matched: exact, lowercase, titlecase, quotes…, folded…' }),
+    candidates: z.array(Candidate),
+  })
   .openapi('Analysis')
+
+/** The answer of a batch. */
+const Batch = z.object({ results: z.array(Analysis) }).openapi('AnalysisBatch')
+
+const JSON_TYPE = { 'Content-Type': 'application/json' }
+/** Answers are sent as the JSON text the cache holds; this is the type the route declares for them. */
+type TypedJson<T extends z.ZodType> = TypedResponse<z.infer<T>, 200, 'json'>
 
 const getRoute = createRoute({
   method: 'get',
@@ -51,7 +63,7 @@ const postRoute = createRoute({
     },
   },
   responses: {
-    200: { description: 'One answer per form, in order', content: { 'application/json': { schema: z.object({ results: z.array(Analysis) }) } } },
+    200: { description: 'One answer per form, in order', content: { 'application/json': { schema: Batch } } },
     ...errorResponses(400, 404, 413, 415),
   },
 })
@@ -64,13 +76,16 @@ export function registerAnalyze(app: OpenAPIHono<AppEnv>): void {
   app.openapi(getRoute, async (c) => {
     const { form, model: name, top, fold, guess } = c.req.valid('query')
     const { model } = await useModel(c, name)
-    return c.json(analyze(model, form, { top, foldDiacritics: fold === '1', guess: guess !== '0' }), 200)
+    const body = analyzeJson(model, form, { top, foldDiacritics: fold === '1', guess: guess !== '0' })
+    return c.body(body, 200, JSON_TYPE) as unknown as TypedJson<typeof Analysis>
   })
 
   app.openapi(postRoute, async (c) => {
     const { forms, top, fold, guess } = c.req.valid('json')
     if (forms.length > MAX_BATCH_FORMS) throw tooLarge(`a batch of ${forms.length} forms`, MAX_BATCH_FORMS, 'formfold analyze')
     const { model } = await useModel(c, c.req.valid('query').model)
-    return c.json({ results: forms.map((form) => analyze(model, form, { top, foldDiacritics: fold === true, guess: guess !== false })) }, 200)
+    const options = { top, foldDiacritics: fold === true, guess: guess !== false }
+    const body = `{"results":[${forms.map((form) => analyzeJson(model, form, options)).join(',')}]}`
+    return c.body(body, 200, JSON_TYPE) as unknown as TypedJson<typeof Batch>
   })
 }
