@@ -15,8 +15,8 @@ export interface AnalyzeOptions extends NormalizeOptions {
   guesser?: Partial<GuessOptions>
 }
 
-export const DEFAULT_TOP = 8
-export const DEFAULT_MIN_SCORE = 0.05
+export const DEFAULT_TOP = 16
+export const DEFAULT_MIN_SCORE = 0.01
 
 /**
  * The answer for one token. `normalized` names the lookups that gave candidates (`exact`, `nfc`,

@@ -50,6 +50,9 @@ interface QuickFit {
   cands: { paradigm: number; stems: string[]; prob: number }[]
 }
 
+/** Weight kept by a lemma whose whole-paradigm ranking does not make the form. */
+const QUICK_MISS = 0.01
+
 const quickCaches = new WeakMap<LookupContext, BoundedCache<QuickFit>>()
 
 /** A spelling to guess from, and how it was derived from the token. */
@@ -83,13 +86,15 @@ export function guessForm(
   hyps.sort(
     (a, b) => b.prior - a.prior || cmp(a.lemma, b.lemma) || cmp(a.upos, b.upos) || cmp(a.form, b.form),
   )
-  const weighed = hyps.slice(0, opts.hypotheses).filter((h) => {
+  // The fast ranker knows whole paradigms only; a form it cannot make may still come from a table
+  // composed cell by cell, so such a lemma is held back, not dropped.
+  const weighed = hyps.slice(0, opts.hypotheses)
+  for (const h of weighed) {
     const q = quickFit(model, ctx, h.lemma, h.upos, h.inherent)
     let inTable = 0
     for (const c of q.cands) if (madeBy(model, c.paradigm, c.stems, h.form)) inTable += c.prob
-    h.weight = h.prior * inTable ** opts.forward
-    return inTable > 0
-  })
+    h.weight = h.prior * (inTable > 0 ? inTable ** opts.forward : QUICK_MISS)
+  }
   weighed.sort(
     (a, b) => b.weight - a.weight || cmp(a.lemma, b.lemma) || cmp(a.upos, b.upos) || cmp(a.form, b.form),
   )
@@ -113,6 +118,7 @@ export function guessForm(
       })
       ;({ marginal, inTable } = formCells(quick, w.form))
     }
+    w.weight = inTable > 0 ? w.prior * inTable ** opts.forward : 0
     return { w, marginal, inTable }
   })
   const z = weighed.reduce((a, w) => a + w.weight, 0)
@@ -120,12 +126,13 @@ export function guessForm(
   const out: (GuessedAnalysis & { how: string })[] = []
   let mass = 0
   for (const { w, marginal, inTable } of cells) {
-    if (inTable <= 0 || mass >= opts.mass) break
+    if (inTable <= 0 || (opts.mass < 1 && mass >= opts.mass)) break
     mass += w.weight / z
     const has = ctx.attested.get(entryKey(w.lemma, w.upos))
     for (const [cell, m] of marginal) {
       if (has?.has(cell)) continue
-      const score = Math.round((w.weight / z) * Math.min(1, m.score / inTable) * 1e4) / 1e4
+      // Four significant digits: tidy answers that still rank improbable guesses apart.
+      const score = Number(((w.weight / z) * Math.min(1, m.score / inTable)).toPrecision(4))
       if (score < floor || score <= 0) continue
       out.push({
         lemma: w.lemma,

@@ -11,7 +11,9 @@ import { germanModel } from './fixtures/german.ts'
 const model = germanModel()
 const entries = model.inflection.lexicon.entries
 const has = (form: string, a: { lemma: string; upos: string; feats: string }, opts = {}) =>
-  analyzeForm(model, form, opts).candidates.find((c) => c.lemma === a.lemma && c.upos === a.upos && c.feats === a.feats)
+  analyzeForm(model, form, opts).candidates.find(
+    (c) => c.lemma === a.lemma && c.upos === a.upos && c.feats === a.feats,
+  )
 
 /** Guess with no bounds, so that every analysis the guesser can reach is listed. */
 const unbounded = { top: 10_000, minScore: 0, guesser: { hypotheses: 10_000, lemmas: 10_000, mass: 1 } }
@@ -21,20 +23,37 @@ describe('analyze returns what expand emits', () => {
     'every form of %s (%s) comes back %s with its exact analysis',
     (lemma, upos, source) => {
       const table = expandLemma(model.inflection, lemma, upos)!
-      for (const f of table.forms) expect(has(f.form, { lemma, upos, feats: f.feats }), f.form).toMatchObject({ source })
+      for (const f of table.forms)
+        expect(has(f.form, { lemma, upos, feats: f.feats }), f.form).toMatchObject({ source })
     },
   )
 
   it('every form of a lemma the model never saw comes back when no table lists it (property)', () => {
-    const noun = fc.tuple(fc.constantFrom('Br', 'Kl', 'Pf', 'Gr', 'Schl', 'Dr'), fc.constantFrom('a', 'i', 'o', 'ei', 'au'), fc.constantFrom('mp', 'nd', 'ck', 'ng', 'lk'), fc.constantFrom('', 'e'))
-    const verb = fc.tuple(fc.constantFrom('br', 'kl', 'pf', 'gr', 'schl', 'dr'), fc.constantFrom('a', 'o', 'ei', 'au'), fc.constantFrom('mp', 'ck', 'lk', 'ch'), fc.constant('en'))
-    const lemma = fc.oneof(noun.map((p) => [p.join(''), 'NOUN'] as const), verb.map((p) => [p.join(''), 'VERB'] as const))
+    const noun = fc.tuple(
+      fc.constantFrom('Br', 'Kl', 'Pf', 'Gr', 'Schl', 'Dr'),
+      fc.constantFrom('a', 'i', 'o', 'ei', 'au'),
+      fc.constantFrom('mp', 'nd', 'ck', 'ng', 'lk'),
+      fc.constantFrom('', 'e'),
+    )
+    const verb = fc.tuple(
+      fc.constantFrom('br', 'kl', 'pf', 'gr', 'schl', 'dr'),
+      fc.constantFrom('a', 'o', 'ei', 'au'),
+      fc.constantFrom('mp', 'ck', 'lk', 'ch'),
+      fc.constant('en'),
+    )
+    const lemma = fc.oneof(
+      noun.map((p) => [p.join(''), 'NOUN'] as const),
+      verb.map((p) => [p.join(''), 'VERB'] as const),
+    )
     fc.assert(
       fc.property(lemma, ([l, upos]) => {
         fc.pre(!entries.some((e) => e.lemma === l))
         for (const f of expandLemma(model.inflection, l, upos)!.forms) {
           if (analyzeForm(model, f.form, { guess: false }).candidates.length > 0) continue
-          expect(has(f.form, { lemma: l, upos, feats: f.feats }, unbounded), `${l} ${f.feats} ${f.form}`).toMatchObject({ source: 'guessed' })
+          expect(
+            has(f.form, { lemma: l, upos, feats: f.feats }, unbounded),
+            `${l} ${f.feats} ${f.form}`,
+          ).toMatchObject({ source: 'guessed' })
         }
       }),
       { numRuns: 40, seed: 7 },
@@ -48,10 +67,20 @@ describe('sources', () => {
   it('never reports an attested form as guessed, in any case (property)', () => {
     // Spellings whose case can be undone (upper-case ß is SS, which lower-cases to ss, another spelling).
     const undoable = attested.filter((f) => f.toUpperCase().toLowerCase() === f.toLowerCase())
-    const spelling = fc.tuple(fc.constantFrom(...undoable), fc.constantFrom('same', 'upper', 'lower', 'title'))
+    const spelling = fc.tuple(
+      fc.constantFrom(...undoable),
+      fc.constantFrom('same', 'upper', 'lower', 'title'),
+    )
     fc.assert(
       fc.property(spelling, ([form, how]) => {
-        const token = how === 'upper' ? form.toUpperCase() : how === 'lower' ? form.toLowerCase() : how === 'title' ? form[0]!.toUpperCase() + form.slice(1) : form
+        const token =
+          how === 'upper'
+            ? form.toUpperCase()
+            : how === 'lower'
+              ? form.toLowerCase()
+              : how === 'title'
+                ? form[0]!.toUpperCase() + form.slice(1)
+                : form
         const got = analyzeForm(model, token).candidates
         expect(got.filter((c) => c.source === 'guessed')).toEqual([])
         expect(got.some((c) => c.source === 'attested')).toBe(true)
@@ -73,7 +102,9 @@ describe('order', () => {
   const back = decodeModel(encodeModel(model))
   const tokens = fc.oneof(
     fc.constantFrom(...model.index.forms()),
-    fc.tuple(fc.constantFrom(...model.index.forms()), fc.constantFrom('n', 'e', 's', 'st', 'ern')).map(([f, s]) => f + s),
+    fc
+      .tuple(fc.constantFrom(...model.index.forms()), fc.constantFrom('n', 'e', 's', 'st', 'ern'))
+      .map(([f, s]) => f + s),
     fc.string({ maxLength: 8 }),
   )
 

@@ -2,7 +2,8 @@
 import { describe, expect, it } from 'vitest'
 import { foldDiacritics, lookupKeys, lookupTiers, titleCase } from '../../../src/core/lookup/normalize.ts'
 
-const keys = (token: string, fold = false) => lookupTiers(token, { foldDiacritics: fold }).map((t) => t.map((k) => `${k.how}:${k.key}`))
+const keys = (token: string, fold = false) =>
+  lookupTiers(token, { foldDiacritics: fold }).map((t) => t.map((k) => `${k.how}:${k.key}`))
 
 describe('lookupTiers', () => {
   it.each([
@@ -11,7 +12,13 @@ describe('lookupTiers', () => {
     ['TAGE', [['exact:TAGE', 'lowercase:tage', 'titlecase:Tage']]],
     ['l’homme', [['exact:l’homme'], ['titlecase:L’homme'], ["quotes:l'homme"]]],
     ["l'homme", [["exact:l'homme"], ["titlecase:L'homme"], ['quotes:l’homme']]],
-    ['„Haus“', [['exact:„Haus“', 'lowercase:„haus“'], ['quotes:Haus', 'quotes+lowercase:haus']]],
+    [
+      '„Haus“',
+      [
+        ['exact:„Haus“', 'lowercase:„haus“'],
+        ['quotes:Haus', 'quotes+lowercase:haus'],
+      ],
+    ],
     ['42', [['exact:42']]],
   ])('%s', (token, expected) => {
     expect(keys(token)).toEqual(expected)
@@ -22,7 +29,11 @@ describe('lookupTiers', () => {
   })
 
   it('folds diacritics only when asked, in a tier of its own', () => {
-    expect(keys('Mäntel').flat().some((k) => k.startsWith('folded'))).toBe(false)
+    expect(
+      keys('Mäntel')
+        .flat()
+        .some((k) => k.startsWith('folded')),
+    ).toBe(false)
     expect(keys('Mäntel', true).at(-1)).toEqual(['folded:Mantel', 'folded+lowercase:mantel'])
   })
 })

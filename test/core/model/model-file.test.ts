@@ -37,7 +37,9 @@ describe('model file', () => {
   })
 
   it.each(probes)('predicts the tables of %s (%s) exactly as before the round trip', (lemma, upos) => {
-    expect(predictTables(back.inflection, lemma, upos, '_', 8)).toEqual(predictTables(model.inflection, lemma, upos, '_', 8))
+    expect(predictTables(back.inflection, lemma, upos, '_', 8)).toEqual(
+      predictTables(model.inflection, lemma, upos, '_', 8),
+    )
     expect(expandLemma(back.inflection, lemma, upos)).toEqual(expandLemma(model.inflection, lemma, upos))
   })
 
