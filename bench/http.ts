@@ -37,8 +37,17 @@ function corpusForms(limit: number): string[] {
 }
 
 /** Start a server process and wait until its /health answers. */
-async function startServer(command: string, argv: string[], url: string, env: NodeJS.ProcessEnv = {}): Promise<ChildProcess> {
-  const child = spawn(command, argv, { cwd: root, env: { ...process.env, ...env }, stdio: ['ignore', 'ignore', 'pipe'] })
+async function startServer(
+  command: string,
+  argv: string[],
+  url: string,
+  env: NodeJS.ProcessEnv = {},
+): Promise<ChildProcess> {
+  const child = spawn(command, argv, {
+    cwd: root,
+    env: { ...process.env, ...env },
+    stdio: ['ignore', 'ignore', 'pipe'],
+  })
   let stderr = ''
   child.stderr!.on('data', (d) => (stderr += d))
   const deadline = Date.now() + 60_000
@@ -59,7 +68,9 @@ const ROUND_SECONDS = 2
 
 function load(url: string, paths: string[], seconds: number): Promise<LoadResult> {
   let i = 0
-  const requests = [{ setupRequest: (req: { path: string }) => ({ ...req, path: paths[i++ % paths.length] }) }]
+  const requests = [
+    { setupRequest: (req: { path: string }) => ({ ...req, path: paths[i++ % paths.length] }) },
+  ]
   return autocannon({ url, connections: CONNECTIONS, duration: seconds, requests }) as Promise<LoadResult>
 }
 
@@ -97,15 +108,25 @@ async function measure(label: string, url: string, forms: string[]) {
     'p99 ms': r.latency.p99,
     errors: r.errors + r.timeouts + r.non2xx,
   })
-  return { rows: [row('GET /health', health), row('GET /v1/analyze', lookups)], ratio: lookups.requests.average / health.requests.average }
+  return {
+    rows: [row('GET /health', health), row('GET /v1/analyze', lookups)],
+    ratio: lookups.requests.average / health.requests.average,
+  }
 }
 
 const forms = corpusForms(2000)
 const results: { label: string; rows: Record<string, unknown>[]; ratio: number }[] = []
 const nodePort = 18788
-const node = await startServer(process.execPath, ['bin/formfold.js', 'serve', '--port', String(nodePort)], `http://127.0.0.1:${nodePort}`)
+const node = await startServer(
+  process.execPath,
+  ['bin/formfold.js', 'serve', '--port', String(nodePort)],
+  `http://127.0.0.1:${nodePort}`,
+)
 try {
-  results.push({ label: 'node', ...(await measure('node (formfold serve)', `http://127.0.0.1:${nodePort}`, forms)) })
+  results.push({
+    label: 'node',
+    ...(await measure('node (formfold serve)', `http://127.0.0.1:${nodePort}`, forms)),
+  })
 } finally {
   node.kill('SIGTERM')
 }
@@ -113,12 +134,28 @@ if (!args.includes('--no-wrangler')) {
   const port = 18787
   const wrangler = await startServer(
     process.execPath,
-    ['node_modules/wrangler/bin/wrangler.js', 'dev', '--local', '--ip', '127.0.0.1', '--port', String(port), '--inspector-port', '19787', '--show-interactive-dev-session=false', '--log-level', 'warn'],
+    [
+      'node_modules/wrangler/bin/wrangler.js',
+      'dev',
+      '--local',
+      '--ip',
+      '127.0.0.1',
+      '--port',
+      String(port),
+      '--inspector-port',
+      '19787',
+      '--show-interactive-dev-session=false',
+      '--log-level',
+      'warn',
+    ],
     `http://127.0.0.1:${port}`,
     { WRANGLER_SEND_METRICS: 'false', CLOUDFLARE_CF_FETCH_ENABLED: 'false' },
   )
   try {
-    results.push({ label: 'wrangler', ...(await measure('wrangler dev (workerd)', `http://127.0.0.1:${port}`, forms)) })
+    results.push({
+      label: 'wrangler',
+      ...(await measure('wrangler dev (workerd)', `http://127.0.0.1:${port}`, forms)),
+    })
   } finally {
     wrangler.kill('SIGTERM')
   }
@@ -127,5 +164,12 @@ if (!args.includes('--no-wrangler')) {
 console.table(results.flatMap((r) => r.rows))
 for (const r of results) console.log(`${r.label}: analyze/health throughput ratio ${r.ratio.toFixed(3)}`)
 const errors = results.flatMap((r) => r.rows).reduce((n, row) => n + Number(row.errors), 0)
-console.log(JSON.stringify({ seconds: SECONDS, connections: CONNECTIONS, ratios: Object.fromEntries(results.map((r) => [r.label, Number(r.ratio.toFixed(3))])), errors }))
+console.log(
+  JSON.stringify({
+    seconds: SECONDS,
+    connections: CONNECTIONS,
+    ratios: Object.fromEntries(results.map((r) => [r.label, Number(r.ratio.toFixed(3))])),
+    errors,
+  }),
+)
 process.exit(errors === 0 ? 0 : 1)

@@ -41,7 +41,10 @@ export function moduleSource(text: string): string {
 
 /** Whether the generated module is the one the demo lexicon gives now. */
 export async function generatedIsCurrent(): Promise<boolean> {
-  const [want, have] = await Promise.all([demoModelText(), readFile(root + GENERATED, 'utf8').catch(() => '')])
+  const [want, have] = await Promise.all([
+    demoModelText(),
+    readFile(root + GENERATED, 'utf8').catch(() => ''),
+  ])
   return have === moduleSource(want)
 }
 

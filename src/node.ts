@@ -1,10 +1,10 @@
 // The Node entry point: the same app on 127.0.0.1 through @hono/node-server, models embedded or from a file.
 import { readFile } from 'node:fs/promises'
 import { basename } from 'node:path'
-import { serve, type ServerType } from '@hono/node-server'
+import { type ServerType, serve } from '@hono/node-server'
 import { decodeModel } from './core/model/decode-model.ts'
-import { registryOver } from './http/app-registry.ts'
 import { createApp } from './http/app.ts'
+import { registryOver } from './http/app-registry.ts'
 import { demoModel } from './http/demo-model.ts'
 import type { EmbeddedModel } from './http/model-registry.ts'
 import { modelCodec, type ServedModel, summarizeModel } from './http/served-model.ts'
@@ -33,7 +33,11 @@ export interface NodeServer {
  * @example modelNameOf('models/de-verbs.model.json') // 'de-verbs'
  */
 export function modelNameOf(path: string): string {
-  const name = basename(path).toLowerCase().replace(/\.json$/, '').replace(/\.model$/, '').replace(/[^a-z0-9._-]+/g, '-')
+  const name = basename(path)
+    .toLowerCase()
+    .replace(/\.json$/, '')
+    .replace(/\.model$/, '')
+    .replace(/[^a-z0-9._-]+/g, '-')
   return /^[a-z0-9]/.test(name) ? name : `m-${name}`
 }
 
@@ -53,11 +57,14 @@ export async function startNodeServer(options: NodeServerOptions): Promise<NodeS
   const app = createApp({ registry: () => registry })
   const env = { WRITE_TOKEN: options.writeToken }
   return new Promise((resolve) => {
-    const server: ServerType = serve({ fetch: (req) => app.fetch(req, env), port: options.port, hostname: '127.0.0.1' }, (info) => {
-      resolve({
-        url: `http://127.0.0.1:${info.port}`,
-        close: () => new Promise<void>((done) => server.close(() => done())),
-      })
-    })
+    const server: ServerType = serve(
+      { fetch: (req) => app.fetch(req, env), port: options.port, hostname: '127.0.0.1' },
+      (info) => {
+        resolve({
+          url: `http://127.0.0.1:${info.port}`,
+          close: () => new Promise<void>((done) => server.close(() => done())),
+        })
+      },
+    )
   })
 }

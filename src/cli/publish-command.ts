@@ -23,7 +23,11 @@ interface PublishOptions {
  * persisted local state (the same objects `wrangler dev` serves), through the same store code as the service.
  * @example await publishLocal(bytes, 'demo2', { config: 'wrangler.toml' })
  */
-export async function publishLocal(bytes: Uint8Array, name: string, o: { config: string; persistTo?: string }): Promise<VersionInfo> {
+export async function publishLocal(
+  bytes: Uint8Array,
+  name: string,
+  o: { config: string; persistTo?: string },
+): Promise<VersionInfo> {
   process.env.WRANGLER_SEND_METRICS ??= 'false'
   process.env.CLOUDFLARE_CF_FETCH_ENABLED ??= 'false'
   const { getPlatformProxy } = await import('wrangler')
@@ -34,7 +38,10 @@ export async function publishLocal(bytes: Uint8Array, name: string, o: { config:
   })
   try {
     if (!proxy.env.BUCKET) throw new Error(`${o.config} has no R2 binding named BUCKET`)
-    const { model: _model, ...info } = await new ModelStore(new R2BlobStore(proxy.env.BUCKET), modelCodec).publish(name, bytes)
+    const { model: _model, ...info } = await new ModelStore(
+      new R2BlobStore(proxy.env.BUCKET),
+      modelCodec,
+    ).publish(name, bytes)
     return info
   } finally {
     await proxy.dispose()
@@ -48,10 +55,15 @@ export async function publishLocal(bytes: Uint8Array, name: string, o: { config:
 export function registerPublish(program: Command): void {
   program
     .command('publish')
-    .description('publish a model file as a new version: to local R2 (wrangler --local state), or to a service with --url')
+    .description(
+      'publish a model file as a new version: to local R2 (wrangler --local state), or to a service with --url',
+    )
     .requiredOption('-m, --model <file>', 'model file (from formfold learn)')
     .requiredOption('--name <name>', 'model name (lowercase letters, digits, ".", "_", "-")')
-    .option('--url <url>', 'a running service: PUT <url>/v1/models/<name> (token from --token or FORMFOLD_WRITE_TOKEN)')
+    .option(
+      '--url <url>',
+      'a running service: PUT <url>/v1/models/<name> (token from --token or FORMFOLD_WRITE_TOKEN)',
+    )
     .option('--token <token>', 'bearer token for --url (default: FORMFOLD_WRITE_TOKEN)')
     .option('--local', 'publish to local R2 through wrangler (the default without --url)')
     .option('--persist-to <dir>', 'wrangler state directory (default: .wrangler/state/v3)')
@@ -61,14 +73,18 @@ export function registerPublish(program: Command): void {
 
 async function publish(o: PublishOptions): Promise<void> {
   if (!MODEL_NAME.test(o.name)) {
-    process.stderr.write(`formfold publish: "${o.name}" is not a model name (lowercase letters, digits, ".", "_", "-")\n`)
+    process.stderr.write(
+      `formfold publish: "${o.name}" is not a model name (lowercase letters, digits, ".", "_", "-")\n`,
+    )
     process.exit(EXIT.badInput)
   }
   const bytes = new Uint8Array(await readFile(o.model))
   if (o.url) {
     const result = await publishToService(o.url, o.name, bytes, o.token ?? process.env.FORMFOLD_WRITE_TOKEN)
     if (!result.ok) {
-      process.stderr.write(`formfold publish: ${result.status} ${result.error.code}: ${result.error.message}\n`)
+      process.stderr.write(
+        `formfold publish: ${result.status} ${result.error.code}: ${result.error.message}\n`,
+      )
       process.exit(result.status >= 400 && result.status < 500 ? EXIT.badInput : EXIT.failed)
     }
     process.stdout.write(`${JSON.stringify(result.version)}\n`)

@@ -7,7 +7,8 @@ export const DEFAULT_SERVE_PORT = 8788
 
 const port = (text: string): number => {
   const n = Number(text)
-  if (!Number.isInteger(n) || n < 0 || n > 65535) throw new InvalidArgumentError('expected a port number 0–65535')
+  if (!Number.isInteger(n) || n < 0 || n > 65535)
+    throw new InvalidArgumentError('expected a port number 0–65535')
   return n
 }
 

@@ -39,7 +39,12 @@ export class ApiError extends Error {
   readonly code: ApiErrorCode | Problem['code']
   readonly details: unknown
 
-  constructor(status: ContentfulStatusCode, code: ApiErrorCode | Problem['code'], message: string, details: unknown = null) {
+  constructor(
+    status: ContentfulStatusCode,
+    code: ApiErrorCode | Problem['code'],
+    message: string,
+    details: unknown = null,
+  ) {
     super(message)
     this.status = status
     this.code = code

@@ -1,7 +1,8 @@
 // Which registry a request uses: one per R2 bucket binding (so its caches live as long as the isolate), or memory.
+
+import { DEMO_MODEL_NAME, demoModel } from './demo-model.ts'
 import type { Bindings } from './env.ts'
 import { type EmbeddedModel, ModelRegistry } from './model-registry.ts'
-import { demoModel, DEMO_MODEL_NAME } from './demo-model.ts'
 import { modelCodec, type ServedModel } from './served-model.ts'
 import { MemoryBlobStore } from './store/memory-blob-store.ts'
 import { ModelStore } from './store/model-store.ts'

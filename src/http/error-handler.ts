@@ -28,7 +28,11 @@ export function toApiError(err: unknown): ApiError {
     const status = err.status as ContentfulStatusCode
     const code = CODE_BY_STATUS[status] ?? (status < 500 ? 'invalid-request' : 'internal')
     const message = err.message || (status === 401 ? 'a bearer token is required' : 'the request was refused')
-    return new ApiError(status, code, err.message === 'Malformed JSON in request body' ? 'body is not valid JSON' : message)
+    return new ApiError(
+      status,
+      code,
+      err.message === 'Malformed JSON in request body' ? 'body is not valid JSON' : message,
+    )
   }
   console.error('formfold: internal error', err)
   return new ApiError(500, 'internal', 'internal error')
@@ -48,7 +52,10 @@ export const onError: ErrorHandler = (err, c) => {
 
 /** `app.notFound`: an unknown path is a 404 in the same shape. */
 export const onNotFound: NotFoundHandler = (c) =>
-  c.json(new ApiError(404, 'not-found', `no route for ${c.req.method} ${new URL(c.req.url).pathname}`).toBody(), 404)
+  c.json(
+    new ApiError(404, 'not-found', `no route for ${c.req.method} ${new URL(c.req.url).pathname}`).toBody(),
+    404,
+  )
 
 /** One zod issue as the API reports it: where, what kind, and zod's own message. */
 export interface IssueDetail {
@@ -62,7 +69,11 @@ export interface IssueDetail {
  * @example issueDetails('json', err) // [{ path: 'json.forms.0', code: 'invalid_type', message: '…' }]
  */
 export function issueDetails(target: string, error: ZodError): IssueDetail[] {
-  return error.issues.map((i) => ({ path: [target, ...i.path.map(String)].join('.'), code: i.code, message: i.message }))
+  return error.issues.map((i) => ({
+    path: [target, ...i.path.map(String)].join('.'),
+    code: i.code,
+    message: i.message,
+  }))
 }
 
 /**

@@ -49,7 +49,14 @@ export function* expansionLines(
     }
     let out = ''
     for (const f of table.forms) {
-      const row = { lemma: table.lemma, form: f.form, upos: table.upos, feats: f.feats, source: f.source, score: f.score }
+      const row = {
+        lemma: table.lemma,
+        form: f.form,
+        upos: table.upos,
+        feats: f.feats,
+        source: f.source,
+        score: f.score,
+      }
       out += `${formatTableRow(row, { scores })}\n`
     }
     yield out

@@ -32,7 +32,9 @@ function checkCount(n: number): void {
  * problems carry the 1-based item number as `line`.
  * @example lemmasFromJson([{ lemma: 'vessa', upos: 'NOUN' }]) // [{ lemma: 'vessa', upos: 'NOUN', feats: '_' }]
  */
-export function lemmasFromJson(items: readonly { lemma: string; upos: string; feats?: string }[]): LemmaRequest[] {
+export function lemmasFromJson(
+  items: readonly { lemma: string; upos: string; feats?: string }[],
+): LemmaRequest[] {
   checkCount(items.length)
   const out: LemmaRequest[] = []
   const problems: Problem[] = []
@@ -42,11 +44,13 @@ export function lemmasFromJson(items: readonly { lemma: string; upos: string; fe
     const lemma = checkWord(item.lemma, 'lemma', at)
     const upos = checkUpos(item.upos, at)
     const feats = checkFeats(item.feats ?? '_', at)
-    const problem = 'problem' in lemma ? lemma.problem : (upos ?? ('problem' in feats ? feats.problem : undefined))
+    const problem =
+      'problem' in lemma ? lemma.problem : (upos ?? ('problem' in feats ? feats.problem : undefined))
     if (problem) {
       bad++
       if (problems.length < MAX_PROBLEM_EXAMPLES) problems.push(problem)
-    } else if (!('problem' in lemma) && !('problem' in feats)) out.push({ lemma: lemma.value, upos: item.upos, feats: feats.feats })
+    } else if (!('problem' in lemma) && !('problem' in feats))
+      out.push({ lemma: lemma.value, upos: item.upos, feats: feats.feats })
   })
   if (bad > 0) throw badList(problems, bad)
   return out

@@ -4,7 +4,9 @@ import type { AppEnv } from './env.ts'
 
 /** The read resources that can be reached under a model's path. */
 const RESOURCES = ['analyze', 'lemmas', 'expand', 'paradigms', 'constraints', 'constraints.tsv']
-const MODEL_PATH = new RegExp(`^/v1/models/([^/]+)/(${RESOURCES.map((r) => r.replace('.', '\\.')).join('|')})(/.*)?$`)
+const MODEL_PATH = new RegExp(
+  `^/v1/models/([^/]+)/(${RESOURCES.map((r) => r.replace('.', '\\.')).join('|')})(/.*)?$`,
+)
 
 /**
  * The URL a model-path request stands for, or null when the path is not one (e.g. `/v1/models/x/versions/2`).

@@ -72,7 +72,10 @@ export class ModelRegistry<M> {
     this.#writable(name)
     const { model, ...info } = await this.store.publish(name, bytes)
     decoded.set(info.sha256, model)
-    this.#pointers.set(name, { pointer: { version: info.version, sha256: info.sha256, movedAt: info.createdAt }, readAt: Date.now() })
+    this.#pointers.set(name, {
+      pointer: { version: info.version, sha256: info.sha256, movedAt: info.createdAt },
+      readAt: Date.now(),
+    })
     return info
   }
 
@@ -95,7 +98,9 @@ export class ModelRegistry<M> {
   }
 
   /** A name's served version and all its stored versions (404 when the name has neither). */
-  async describe(name: string): Promise<{ name: string; embedded: boolean; served: number | null; versions: VersionInfo[] }> {
+  async describe(
+    name: string,
+  ): Promise<{ name: string; embedded: boolean; served: number | null; versions: VersionInfo[] }> {
     const embedded = this.#embedded.get(name)
     if (embedded) return { name, embedded: true, served: null, versions: [] }
     checkName(name)
@@ -106,7 +111,13 @@ export class ModelRegistry<M> {
 
   #embeddedListing(e: EmbeddedModel<M> & { model?: M }): ModelListing {
     e.model ??= e.load()
-    return { name: e.name, embedded: true, default: e.name === this.defaultName, served: null, summary: e.summarize(e.model) }
+    return {
+      name: e.name,
+      embedded: true,
+      default: e.name === this.defaultName,
+      served: null,
+      summary: e.summarize(e.model),
+    }
   }
 
   async #pointer(name: string): Promise<Pointer> {
@@ -120,13 +131,23 @@ export class ModelRegistry<M> {
 
   #writable(name: string): void {
     checkName(name)
-    if (this.#embedded.has(name)) throw new ApiError(409, 'read-only-model', `model "${name}" is embedded in the service and can't be replaced`)
+    if (this.#embedded.has(name))
+      throw new ApiError(
+        409,
+        'read-only-model',
+        `model "${name}" is embedded in the service and can't be replaced`,
+      )
   }
 }
 
 function checkName(name: string): void {
   if (!MODEL_NAME.test(name)) {
-    throw new ApiError(400, 'invalid-request', `"${name}" is not a model name (lowercase letters, digits, ".", "_", "-")`, { model: name })
+    throw new ApiError(
+      400,
+      'invalid-request',
+      `"${name}" is not a model name (lowercase letters, digits, ".", "_", "-")`,
+      { model: name },
+    )
   }
 }
 

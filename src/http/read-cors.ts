@@ -3,7 +3,12 @@ import type { MiddlewareHandler } from 'hono'
 import { cors } from 'hono/cors'
 
 /** Response headers a page on another origin may read. */
-export const EXPOSED_HEADERS = ['Content-Disposition', 'Formfold-Model', 'Formfold-Model-Version', 'Formfold-Report']
+export const EXPOSED_HEADERS = [
+  'Content-Disposition',
+  'Formfold-Model',
+  'Formfold-Model-Version',
+  'Formfold-Report',
+]
 
 const readCors = cors({
   origin: '*',
@@ -20,7 +25,10 @@ const readCors = cors({
 export const readCorsOnly: MiddlewareHandler = async (c, next) => {
   const method = c.req.method
   const preflightFor = c.req.header('access-control-request-method')?.toUpperCase()
-  const isWrite = method === 'PUT' || method === 'DELETE' || (method === 'OPTIONS' && (preflightFor === 'PUT' || preflightFor === 'DELETE'))
+  const isWrite =
+    method === 'PUT' ||
+    method === 'DELETE' ||
+    (method === 'OPTIONS' && (preflightFor === 'PUT' || preflightFor === 'DELETE'))
   if (isWrite) return next()
   return readCors(c, next)
 }

@@ -52,9 +52,14 @@ export function jsonBody(limit: number, instead?: string): MiddlewareHandler {
   const bound = limitBody(limit, instead)
   return async (c, next) => {
     if (!JSON_TYPE.test(mediaType(c))) {
-      throw new ApiError(415, 'unsupported-media-type', 'the body must be JSON (Content-Type: application/json)', {
-        contentType: c.req.header('content-type') ?? null,
-      })
+      throw new ApiError(
+        415,
+        'unsupported-media-type',
+        'the body must be JSON (Content-Type: application/json)',
+        {
+          contentType: c.req.header('content-type') ?? null,
+        },
+      )
     }
     await bound(c, async () => {
       const text = decodeStrict(new Uint8Array(await c.req.arrayBuffer()), 400)

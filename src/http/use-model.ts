@@ -9,7 +9,10 @@ import type { ServedModel } from './served-model.ts'
  * `Formfold-Model-Version` which one answers (`embedded` for a model built into the service).
  * @example const { model } = await useModel(c, c.req.valid('query').model)
  */
-export async function useModel(c: Context<AppEnv>, name: string | undefined): Promise<LoadedModel<ServedModel>> {
+export async function useModel(
+  c: Context<AppEnv>,
+  name: string | undefined,
+): Promise<LoadedModel<ServedModel>> {
   const loaded = await c.var.models.get(name)
   c.header('Formfold-Model', loaded.name)
   c.header('Formfold-Model-Version', loaded.version === null ? 'embedded' : String(loaded.version))

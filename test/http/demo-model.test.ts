@@ -4,6 +4,9 @@ import { generatedIsCurrent } from '../../scripts/build-demo-model.ts'
 
 describe('the embedded demo model', () => {
   it('is current with demo-lexicon/ and the learner', { timeout: 180_000 }, async () => {
-    expect(await generatedIsCurrent(), 'src/http/demo-model.generated.ts is stale: run npm run build:demo-model').toBe(true)
+    expect(
+      await generatedIsCurrent(),
+      'src/http/demo-model.generated.ts is stale: run npm run build:demo-model',
+    ).toBe(true)
   })
 })

@@ -46,7 +46,9 @@ export function describeModelStore(label: string, makeBlobs: () => BlobStore): v
       expect((await store.versions('alpha')).map((v) => v.version)).toEqual([1, 2])
       expect(hasAdded((await store.load('alpha')).model)).toBe(true)
       expect(hasAdded((await store.load('alpha', 1)).model)).toBe(false)
-      expect((await store.versions('alpha'))[1]!.summary.bareLemmas).toBe((await store.versions('alpha'))[0]!.summary.bareLemmas! + 1)
+      expect((await store.versions('alpha'))[1]!.summary.bareLemmas).toBe(
+        (await store.versions('alpha'))[0]!.summary.bareLemmas! + 1,
+      )
     })
 
     for (const [what, bytes] of corruptModels()) {

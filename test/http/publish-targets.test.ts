@@ -5,11 +5,11 @@ import { join } from 'node:path'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { getPlatformProxy } from 'wrangler'
 import { publishLocal } from '../../src/cli/publish-command.ts'
-import { type NodeServer, startNodeServer } from '../../src/node.ts'
 import { publishToService } from '../../src/http/publish-client.ts'
 import { modelCodec } from '../../src/http/served-model.ts'
 import { ModelStore } from '../../src/http/store/model-store.ts'
 import { R2BlobStore } from '../../src/http/store/r2-blob-store.ts'
+import { type NodeServer, startNodeServer } from '../../src/node.ts'
 import { corruptModels, modelV1 } from './fixtures.ts'
 
 describe('publishing to a running service', { timeout: 60_000 }, () => {
@@ -44,7 +44,11 @@ describe('publishing to local R2 through wrangler', { timeout: 120_000 }, () => 
     expect(info.version).toBe(1)
     const again = await publishLocal(modelV1, 'local', { config: 'wrangler.toml', persistTo: dir })
     expect(again.version).toBe(2)
-    const proxy = await getPlatformProxy<{ BUCKET: R2Bucket }>({ configPath: 'wrangler.toml', persist: { path: dir }, remoteBindings: false })
+    const proxy = await getPlatformProxy<{ BUCKET: R2Bucket }>({
+      configPath: 'wrangler.toml',
+      persist: { path: dir },
+      remoteBindings: false,
+    })
     try {
       const store = new ModelStore(new R2BlobStore(proxy.env.BUCKET), modelCodec)
       expect((await store.pointer('local'))?.version).toBe(2)

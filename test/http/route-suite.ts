@@ -46,7 +46,9 @@ export function describeRoutes(target: () => RouteTarget): void {
       const { status, body } = await json(res)
       expect(status).toBe(200)
       expect(body.form).toBe('lokan')
-      expect(body.candidates).toContainEqual(analysis('lokka', 'NOUN', 'Case=Acc|Gender=Fem|Number=Sing', 'attested'))
+      expect(body.candidates).toContainEqual(
+        analysis('lokka', 'NOUN', 'Case=Acc|Gender=Fem|Number=Sing', 'attested'),
+      )
     })
 
     it('answers as the core does, the first time and from the cache', async () => {
@@ -55,7 +57,9 @@ export function describeRoutes(target: () => RouteTarget): void {
       for (const form of ['lokan', 'Kötit', 'baskerka', '"lokan"', 'velmoraš']) {
         const want = JSON.parse(JSON.stringify(analyzeForm(model, form)))
         for (let round = 0; round < 2; round++) {
-          const { status, body } = await json(await target().fetch(`/v1/analyze?form=${encodeURIComponent(form)}`))
+          const { status, body } = await json(
+            await target().fetch(`/v1/analyze?form=${encodeURIComponent(form)}`),
+          )
           expect([status, body]).toEqual([200, want])
         }
       }
@@ -68,7 +72,9 @@ export function describeRoutes(target: () => RouteTarget): void {
     })
 
     it('analyzes a batch in order (kötti, Nom.Pl = Acc.Pl kötit: README, class N7)', async () => {
-      const { status, body } = await json(await target().fetch('/v1/analyze', postJson({ forms: ['lokan', 'kötit'] })))
+      const { status, body } = await json(
+        await target().fetch('/v1/analyze', postJson({ forms: ['lokan', 'kötit'] })),
+      )
       expect(status).toBe(200)
       expect(body.results.map((r: { form: string }) => r.form)).toEqual(['lokan', 'kötit'])
       expect(body.results[1].candidates).toEqual(
@@ -84,11 +90,19 @@ export function describeRoutes(target: () => RouteTarget): void {
       expect(status).toBe(200)
       const [table] = body.tables
       expect([table.source, table.upos, table.score]).toEqual(['attested', 'NOUN', 1])
-      expect(table.forms).toContainEqual(expect.objectContaining({ form: 'lokan', feats: 'Case=Acc|Gender=Fem|Number=Sing', source: 'attested' }))
+      expect(table.forms).toContainEqual(
+        expect.objectContaining({
+          form: 'lokan',
+          feats: 'Case=Acc|Gender=Fem|Number=Sing',
+          source: 'attested',
+        }),
+      )
     })
 
     it('predicts the table of a listed lemma without one, as the core does', async () => {
-      const { status, body } = await json(await target().fetch(`/v1/lemmas/${encodeURIComponent(BARE.lemma)}`))
+      const { status, body } = await json(
+        await target().fetch(`/v1/lemmas/${encodeURIComponent(BARE.lemma)}`),
+      )
       expect(status).toBe(200)
       const core = expandLemma(decodeModel(DEMO_MODEL_TEXT).inflection, BARE.lemma, BARE.upos, BARE.feats)
       expect(body.tables).toEqual([JSON.parse(JSON.stringify(core))])
@@ -98,7 +112,9 @@ export function describeRoutes(target: () => RouteTarget): void {
     it('asks for a UPOS before predicting an unlisted lemma', async () => {
       const missing = await json(await target().fetch('/v1/lemmas/hakkara'))
       expect([missing.status, missing.body.error.code]).toEqual([404, 'unknown-lemma'])
-      const { status, body } = await json(await target().fetch('/v1/lemmas/hakkara?upos=NOUN&feats=Gender%3DFem&alternatives=2'))
+      const { status, body } = await json(
+        await target().fetch('/v1/lemmas/hakkara?upos=NOUN&feats=Gender%3DFem&alternatives=2'),
+      )
       expect(status).toBe(200)
       expect(body.tables[0].source).toBe('predicted')
       expect(body.tables[0].alternatives.length).toBeLessThanOrEqual(2)
@@ -121,12 +137,18 @@ export function describeRoutes(target: () => RouteTarget): void {
       const lemmas = [{ lemma: 'lokka', upos: 'NOUN' }, BARE]
       const jsonl = await target().fetch('/v1/expand', postJson({ lemmas }))
       expect(jsonl.headers.get('content-type')).toMatch(/^application\/jsonl/)
-      const lines = (await jsonl.text()).trimEnd().split('\n').map((l) => JSON.parse(l))
+      const lines = (await jsonl.text())
+        .trimEnd()
+        .split('\n')
+        .map((l) => JSON.parse(l))
       expect(lines.map((t) => [t.lemma, t.source])).toEqual([
         ['lokka', 'attested'],
         [BARE.lemma, 'predicted'],
       ])
-      const tsv = await target().fetch('/v1/expand?scores=1', postJson({ lemmas }, { accept: 'text/tab-separated-values' }))
+      const tsv = await target().fetch(
+        '/v1/expand?scores=1',
+        postJson({ lemmas }, { accept: 'text/tab-separated-values' }),
+      )
       expect(tsv.headers.get('content-type')).toMatch(/^text\/tab-separated-values/)
       const rows = (await tsv.text()).split('\n').filter((l) => l && !l.startsWith('#'))
       expect(rows).toContain('lokka\tlokan\tNOUN\tCase=Acc|Gender=Fem|Number=Sing\tattested\t1')
@@ -145,7 +167,11 @@ export function describeRoutes(target: () => RouteTarget): void {
 
     it('writes the constraint file of an uploaded corpus, with the report alongside', async () => {
       const corpus = 'Lokka on tūna. Kötit ot lokan.\n'
-      const res = await target().fetch('/v1/constraints', { method: 'POST', headers: { 'content-type': 'text/plain' }, body: corpus })
+      const res = await target().fetch('/v1/constraints', {
+        method: 'POST',
+        headers: { 'content-type': 'text/plain' },
+        body: corpus,
+      })
       expect(res.status).toBe(200)
       expect(res.headers.get('content-disposition')).toBe('attachment; filename="constraints.tsv"')
       const headline = JSON.parse(res.headers.get('formfold-report')!)
@@ -202,7 +228,9 @@ export function describeRoutes(target: () => RouteTarget): void {
 
     it('lists the embedded demo model as the default', async () => {
       const { body } = await json(await target().fetch('/v1/models'))
-      expect(body.models).toContainEqual(expect.objectContaining({ name: 'demo', embedded: true, default: true }))
+      expect(body.models).toContainEqual(
+        expect.objectContaining({ name: 'demo', embedded: true, default: true }),
+      )
     })
   })
 }

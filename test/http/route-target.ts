@@ -7,6 +7,7 @@ export interface RouteTarget {
 }
 
 /** JSON of a response, with its status, for compact assertions. */
+// biome-ignore lint/suspicious/noExplicitAny: answers of many shapes, read field by field in assertions
 export async function json(res: Response): Promise<{ status: number; body: any }> {
   return { status: res.status, body: await res.json() }
 }
@@ -18,5 +19,9 @@ export function freshName(prefix: string): string {
 
 /** A JSON POST. */
 export function postJson(body: unknown, headers: Record<string, string> = {}): RequestInit {
-  return { method: 'POST', headers: { 'content-type': 'application/json', ...headers }, body: JSON.stringify(body) }
+  return {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', ...headers },
+    body: JSON.stringify(body),
+  }
 }

@@ -7,7 +7,10 @@ import type { RouteTarget } from './route-target.ts'
 
 const app = createApp()
 const token = 'node-suite-write-token'
-const target = (): RouteTarget => ({ fetch: (path, init) => Promise.resolve(app.request(path, init, { WRITE_TOKEN: token })), token })
+const target = (): RouteTarget => ({
+  fetch: (path, init) => Promise.resolve(app.request(path, init, { WRITE_TOKEN: token })),
+  token,
+})
 
 describeRoutes(target)
 describePublishing(target)

@@ -6,5 +6,8 @@ import { describeModelStore } from '../http/model-store-suite.ts'
 import { freshName } from '../http/route-target.ts'
 import { PrefixedBlobStore } from './prefixed-blob-store.ts'
 
-describeModelStore('the R2 binding', () => new PrefixedBlobStore(new R2BlobStore(env.BUCKET), `${freshName('store')}/`))
+describeModelStore(
+  'the R2 binding',
+  () => new PrefixedBlobStore(new R2BlobStore(env.BUCKET), `${freshName('store')}/`),
+)
 describeModelStore('memory (in workerd)', () => new MemoryBlobStore())

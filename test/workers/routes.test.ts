@@ -10,7 +10,10 @@ import type { RouteTarget } from '../http/route-target.ts'
 
 const token = 'workers-suite-write-token'
 const bindings = { ...env, WRITE_TOKEN: token }
-const target = (): RouteTarget => ({ fetch: (path, init) => Promise.resolve(app.request(path, init, bindings)), token })
+const target = (): RouteTarget => ({
+  fetch: (path, init) => Promise.resolve(app.request(path, init, bindings)),
+  token,
+})
 
 describe('the worker entry point', { timeout: 30_000 }, () => {
   it('runs in workerd with the R2 and KV bindings', async () => {
@@ -26,7 +29,10 @@ describe('the worker entry point', { timeout: 30_000 }, () => {
   })
 
   it('refuses writes when no write secret is bound', async () => {
-    const res = await exports.default.fetch('http://formfold.test/v1/models/x', { method: 'PUT', headers: { authorization: 'Bearer anything' } })
+    const res = await exports.default.fetch('http://formfold.test/v1/models/x', {
+      method: 'PUT',
+      headers: { authorization: 'Bearer anything' },
+    })
     expect(res.status).toBe(401)
   })
 })

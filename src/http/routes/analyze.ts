@@ -10,16 +10,27 @@ import { jsonBody } from '../strict-input.ts'
 import { useModel } from '../use-model.ts'
 
 const Options = {
-  top: z.coerce.number().int().min(1).max(MAX_TOP).optional().openapi({ description: 'At most this many candidates.' }),
+  top: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(MAX_TOP)
+    .optional()
+    .openapi({ description: 'At most this many candidates.' }),
   fold: z.enum(['0', '1']).optional().openapi({ description: '1: also try the form without diacritics.' }),
-  guess: z.enum(['0', '1']).optional().openapi({ description: '0: no guesses for a form the index lacks (default 1).' }),
+  guess: z
+    .enum(['0', '1'])
+    .optional()
+    .openapi({ description: '0: no guesses for a form the index lacks (default 1).' }),
 }
 
 /** One form's answer: the form asked, the spelling that matched (after normalization), its candidates. */
 export const Analysis = z
   .object({
     form: z.string(),
-    normalized: z.array(z.string()).openapi({ description: 'The spellings that matched: exact, lowercase, titlecase, quotes…, folded…' }),
+    normalized: z
+      .array(z.string())
+      .openapi({ description: 'The spellings that matched: exact, lowercase, titlecase, quotes…, folded…' }),
     candidates: z.array(Candidate),
   })
   .openapi('Analysis')
@@ -34,9 +45,13 @@ type TypedJson<T extends z.ZodType> = TypedResponse<z.infer<T>, 200, 'json'>
 const getRoute = createRoute({
   method: 'get',
   path: '/v1/analyze',
-  summary: 'Candidate analyses (lemma, UPOS, FEATS) of one form, each attested, predicted or guessed, with a score',
+  summary:
+    'Candidate analyses (lemma, UPOS, FEATS) of one form, each attested, predicted or guessed, with a score',
   request: { query: z.object({ form: Form, model: ModelQuery, ...Options }) },
-  responses: { 200: { description: 'Candidates', content: { 'application/json': { schema: Analysis } } }, ...errorResponses(400, 404) },
+  responses: {
+    200: { description: 'Candidates', content: { 'application/json': { schema: Analysis } } },
+    ...errorResponses(400, 404),
+  },
 })
 
 const postRoute = createRoute({
@@ -52,7 +67,10 @@ const postRoute = createRoute({
         'application/json': {
           schema: z
             .object({
-              forms: z.array(Form).min(1).openapi({ description: `1 to ${MAX_BATCH_FORMS} forms (more: 413).` }),
+              forms: z
+                .array(Form)
+                .min(1)
+                .openapi({ description: `1 to ${MAX_BATCH_FORMS} forms (more: 413).` }),
               top: Options.top.unwrap().optional(),
               fold: z.boolean().optional(),
               guess: z.boolean().optional(),
@@ -82,7 +100,8 @@ export function registerAnalyze(app: OpenAPIHono<AppEnv>): void {
 
   app.openapi(postRoute, async (c) => {
     const { forms, top, fold, guess } = c.req.valid('json')
-    if (forms.length > MAX_BATCH_FORMS) throw tooLarge(`a batch of ${forms.length} forms`, MAX_BATCH_FORMS, 'formfold analyze')
+    if (forms.length > MAX_BATCH_FORMS)
+      throw tooLarge(`a batch of ${forms.length} forms`, MAX_BATCH_FORMS, 'formfold analyze')
     const { model } = await useModel(c, c.req.valid('query').model)
     const options = { top, foldDiacritics: fold === true, guess: guess !== false }
     const body = `{"results":[${forms.map((form) => analyzeJson(model, form, options)).join(',')}]}`

@@ -3,8 +3,8 @@ import { createRoute, type OpenAPIHono, z } from '@hono/zod-openapi'
 import { constrainCorpus, lexiconConstraints } from '../../core/constrain/constrain-corpus.ts'
 import { type ConstraintFileHeader, writeConstraintFile } from '../../core/constrain/constraint-file.ts'
 import type { CoverageReport } from '../../core/constrain/coverage-report.ts'
-import { encodeLines } from '../../formats/encode-lines.ts'
 import { openCorpus } from '../../formats/corpus-reader.ts'
+import { encodeLines } from '../../formats/encode-lines.ts'
 import { ApiError } from '../api-error.ts'
 import type { AppEnv } from '../env.ts'
 import { MAX_CORPUS_BYTES } from '../limits.ts'
@@ -18,13 +18,20 @@ const JSONL = 'application/jsonl; charset=utf-8'
 const CLI = 'formfold constrain'
 /** Corpus media types: plain text (or CoNLL-U, sniffed), or CoNLL-U declared. */
 const CORPUS_TYPES = ['text/plain', 'text/x-conllu']
-const Level = z.enum(['upos', 'full']).default('upos').openapi({ description: 'Allowed tags: UPOS, or UPOS|FEATS.' })
-const fileContent = { [TSV]: { schema: { type: 'string' } }, [JSONL]: { schema: { type: 'string' } } } as const
+const Level = z
+  .enum(['upos', 'full'])
+  .default('upos')
+  .openapi({ description: 'Allowed tags: UPOS, or UPOS|FEATS.' })
+const fileContent = {
+  [TSV]: { schema: { type: 'string' } },
+  [JSONL]: { schema: { type: 'string' } },
+} as const
 
 const corpusRoute = createRoute({
   method: 'post',
   path: '/v1/constraints',
-  summary: 'The constraint file of a corpus (plain text or CoNLL-U), as a download; the coverage report alongside',
+  summary:
+    'The constraint file of a corpus (plain text or CoNLL-U), as a download; the coverage report alongside',
   description:
     'TSV by default (`Accept: application/jsonl` for JSON lines) with the report summarized in the `Formfold-Report` ' +
     'header; `Accept: application/json` answers `{report, file}` with the full report.',
@@ -32,11 +39,17 @@ const corpusRoute = createRoute({
     query: z.object({ model: ModelQuery, level: Level, format: z.enum(['text', 'conllu']).optional() }),
     body: {
       required: true,
-      content: { 'text/plain': { schema: { type: 'string' } }, 'text/x-conllu': { schema: { type: 'string' } } },
+      content: {
+        'text/plain': { schema: { type: 'string' } },
+        'text/x-conllu': { schema: { type: 'string' } },
+      },
     },
   },
   responses: {
-    200: { description: 'The constraint file', content: { ...fileContent, 'application/json': { schema: { type: 'object' } } } },
+    200: {
+      description: 'The constraint file',
+      content: { ...fileContent, 'application/json': { schema: { type: 'object' } } },
+    },
     ...errorResponses(400, 404, 413, 415, 422),
   },
 })
@@ -46,7 +59,10 @@ const lexiconRoute = createRoute({
   path: '/v1/constraints.tsv',
   summary: 'The constraint file of every form the model knows (count 0), streamed',
   request: { query: z.object({ model: ModelQuery, level: Level }) },
-  responses: { 200: { description: 'The constraint file', content: { [TSV]: { schema: { type: 'string' } } } }, ...errorResponses(400, 404) },
+  responses: {
+    200: { description: 'The constraint file', content: { [TSV]: { schema: { type: 'string' } } } },
+    ...errorResponses(400, 404),
+  },
 })
 
 /** The report's headline figures, small enough for a response header. */
@@ -71,11 +87,16 @@ export function registerConstraints(app: OpenAPIHono<AppEnv>): void {
     const { model: name, level, format } = c.req.valid('query')
     const type = mediaType(c)
     if (!CORPUS_TYPES.includes(type)) {
-      throw new ApiError(415, 'unsupported-media-type', `send the corpus as ${CORPUS_TYPES.join(' or ')}`, { contentType: type || null })
+      throw new ApiError(415, 'unsupported-media-type', `send the corpus as ${CORPUS_TYPES.join(' or ')}`, {
+        contentType: type || null,
+      })
     }
     const bytes = await readBytes(c, MAX_CORPUS_BYTES, CLI)
     const loaded = await useModel(c, name)
-    const corpus = await openCorpus(bytes, { file: 'corpus', format: format ?? (type === 'text/plain' ? undefined : 'conllu') })
+    const corpus = await openCorpus(bytes, {
+      file: 'corpus',
+      format: format ?? (type === 'text/plain' ? undefined : 'conllu'),
+    })
     const { rows, report, tally } = await constrainCorpus(corpus, analyzerOf(loaded.model), { level })
     const header: ConstraintFileHeader = {
       model: { name: loaded.name, version: loaded.version ?? 'embedded' },
@@ -89,13 +110,19 @@ export function registerConstraints(app: OpenAPIHono<AppEnv>): void {
     const jsonl = /\bapplication\/(jsonl|x-ndjson)\b/.test(accept)
     c.header('Content-Disposition', `attachment; filename="constraints.${jsonl ? 'jsonl' : 'tsv'}"`)
     c.header('Formfold-Report', JSON.stringify(reportHeadline(report)))
-    return c.body(encodeLines(writeConstraintFile(rows, header, jsonl ? 'jsonl' : 'tsv')), 200, { 'Content-Type': jsonl ? JSONL : TSV })
+    return c.body(encodeLines(writeConstraintFile(rows, header, jsonl ? 'jsonl' : 'tsv')), 200, {
+      'Content-Type': jsonl ? JSONL : TSV,
+    })
   })
 
   app.openapi(lexiconRoute, async (c) => {
     const { model: name, level } = c.req.valid('query')
     const loaded = await useModel(c, name)
-    const header: ConstraintFileHeader = { model: { name: loaded.name, version: loaded.version ?? 'embedded' }, corpus: null, options: { level } }
+    const header: ConstraintFileHeader = {
+      model: { name: loaded.name, version: loaded.version ?? 'embedded' },
+      corpus: null,
+      options: { level },
+    }
     const rows = lexiconConstraints(loaded.model.index.forms(), analyzerOf(loaded.model), { level })
     c.header('Content-Disposition', `attachment; filename="${loaded.name}-constraints.tsv"`)
     return c.body(encodeLines(writeConstraintFile(rows, header, 'tsv')), 200, { 'Content-Type': TSV })

@@ -27,18 +27,26 @@ const ExpandJson = z
 const expandRoute = createRoute({
   method: 'post',
   path: '/v1/expand',
-  summary: 'Tables for a lemma list, streamed: JSON lines (default) or TSV table rows (Accept: text/tab-separated-values)',
-  middleware: [(c, next) => (mediaType(c) === 'application/json' ? jsonBody(MAX_BODY_BYTES, CLI)(c, next) : next())] as const,
+  summary:
+    'Tables for a lemma list, streamed: JSON lines (default) or TSV table rows (Accept: text/tab-separated-values)',
+  middleware: [
+    (c, next) => (mediaType(c) === 'application/json' ? jsonBody(MAX_BODY_BYTES, CLI)(c, next) : next()),
+  ] as const,
   request: {
     query: z.object({
       model: ModelQuery,
-      scores: z.enum(['0', '1', 'false', 'true']).optional().openapi({ description: 'TSV: add source and score columns.' }),
+      scores: z
+        .enum(['0', '1', 'false', 'true'])
+        .optional()
+        .openapi({ description: 'TSV: add source and score columns.' }),
     }),
     body: {
       required: false,
       content: {
         'application/json': { schema: ExpandJson },
-        'text/tab-separated-values': { schema: { type: 'string', description: 'lemma<TAB>upos[<TAB>feats] lines' } },
+        'text/tab-separated-values': {
+          schema: { type: 'string', description: 'lemma<TAB>upos[<TAB>feats] lines' },
+        },
         'text/plain': { schema: { type: 'string', description: 'as text/tab-separated-values' } },
       },
     },
@@ -46,7 +54,10 @@ const expandRoute = createRoute({
   responses: {
     200: {
       description: 'One table per lemma, in order; a lemma no paradigm fits is said so in place',
-      content: { [EXPAND_MEDIA_TYPES.jsonl]: { schema: { type: 'string' } }, [EXPAND_MEDIA_TYPES.tsv]: { schema: { type: 'string' } } },
+      content: {
+        [EXPAND_MEDIA_TYPES.jsonl]: { schema: { type: 'string' } },
+        [EXPAND_MEDIA_TYPES.tsv]: { schema: { type: 'string' } },
+      },
     },
     ...errorResponses(400, 404, 413, 415, 422),
   },
@@ -70,12 +81,19 @@ export function registerExpand(app: OpenAPIHono<AppEnv>): void {
     } else if (TSV_TYPES.includes(mediaType(c))) {
       lemmas = await lemmasFromTsv(await readBytes(c, MAX_BODY_BYTES, CLI))
     } else {
-      throw new ApiError(400, 'invalid-request', 'send a lemma list: JSON {"lemmas":[…]} or lemma<TAB>upos lines as text/tab-separated-values')
+      throw new ApiError(
+        400,
+        'invalid-request',
+        'send a lemma list: JSON {"lemmas":[…]} or lemma<TAB>upos lines as text/tab-separated-values',
+      )
     }
     const { model } = await useModel(c, query.model)
     const format = expandFormat(c.req.header('accept'))
     const scores = query.scores === '1' || query.scores === 'true'
-    const expand = (r: LemmaRequest) => expandLemma(model.inflection, r.lemma, r.upos, r.feats, { alternatives })
-    return c.body(expansionStream(lemmas, expand, format, scores), 200, { 'Content-Type': EXPAND_MEDIA_TYPES[format] })
+    const expand = (r: LemmaRequest) =>
+      expandLemma(model.inflection, r.lemma, r.upos, r.feats, { alternatives })
+    return c.body(expansionStream(lemmas, expand, format, scores), 200, {
+      'Content-Type': EXPAND_MEDIA_TYPES[format],
+    })
   })
 }

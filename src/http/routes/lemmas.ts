@@ -14,7 +14,8 @@ const LemmaTables = z.object({ lemma: z.string(), tables: z.array(Table) }).open
 const lemmaRoute = createRoute({
   method: 'get',
   path: '/v1/lemmas/{lemma}',
-  summary: "A lemma's tables: the dictionary's (attested) or the best paradigm's (predicted, scored per form)",
+  summary:
+    "A lemma's tables: the dictionary's (attested) or the best paradigm's (predicted, scored per form)",
   description:
     'Without `upos`, the tables of every entry of the lemma in the dictionary (404 if it has none). With `upos`, ' +
     'that table — predicted for a lemma the dictionary lacks or lists without a table.',
@@ -23,11 +24,16 @@ const lemmaRoute = createRoute({
     query: z.object({
       model: ModelQuery,
       upos: Upos.optional(),
-      feats: Feats.optional().openapi({ description: 'Inherent features (e.g. Gender=Fem) of a predicted table.' }),
+      feats: Feats.optional().openapi({
+        description: 'Inherent features (e.g. Gender=Fem) of a predicted table.',
+      }),
       alternatives: z.coerce.number().int().min(0).max(MAX_ALTERNATIVES).default(0),
     }),
   },
-  responses: { 200: { description: 'Tables', content: { 'application/json': { schema: LemmaTables } } }, ...errorResponses(400, 404) },
+  responses: {
+    200: { description: 'Tables', content: { 'application/json': { schema: LemmaTables } } },
+    ...errorResponses(400, 404),
+  },
 })
 
 const byLemmaCache = new WeakMap<ServedModel, Map<string, LexEntry[]>>()
@@ -56,9 +62,16 @@ export function registerLemmas(app: OpenAPIHono<AppEnv>): void {
     const lemma = c.req.valid('param').lemma.normalize('NFC')
     const { model: name, upos, feats, alternatives } = c.req.valid('query')
     const { model } = await useModel(c, name)
-    const wanted = upos ? [{ upos, inherent: feats }] : entriesOf(model, lemma).map((e) => ({ upos: e.upos, inherent: feats }))
+    const wanted = upos
+      ? [{ upos, inherent: feats }]
+      : entriesOf(model, lemma).map((e) => ({ upos: e.upos, inherent: feats }))
     if (wanted.length === 0) {
-      throw new ApiError(404, 'unknown-lemma', `"${lemma}" is not in the dictionary; give ?upos= to predict its table`, { lemma })
+      throw new ApiError(
+        404,
+        'unknown-lemma',
+        `"${lemma}" is not in the dictionary; give ?upos= to predict its table`,
+        { lemma },
+      )
     }
     const tables: ExpandedTable[] = []
     for (const w of wanted) {
@@ -66,7 +79,10 @@ export function registerLemmas(app: OpenAPIHono<AppEnv>): void {
       if (table) tables.push(table)
     }
     if (tables.length === 0) {
-      throw new ApiError(404, 'unknown-lemma', `no learned ${upos} paradigm applies to "${lemma}"`, { lemma, upos })
+      throw new ApiError(404, 'unknown-lemma', `no learned ${upos} paradigm applies to "${lemma}"`, {
+        lemma,
+        upos,
+      })
     }
     return c.json({ lemma, tables }, 200)
   })

@@ -3,24 +3,47 @@ import { createRoute, type OpenAPIHono, z } from '@hono/zod-openapi'
 import { ApiError } from '../api-error.ts'
 import type { AppEnv } from '../env.ts'
 import { MAX_MODEL_BYTES } from '../limits.ts'
-import { MODEL_MEDIA_TYPE, MODEL_MEDIA_TYPES } from '../served-model.ts'
 import { errorResponses } from '../schemas/common.ts'
+import { MODEL_MEDIA_TYPE, MODEL_MEDIA_TYPES } from '../served-model.ts'
 import { mediaType, readBytes } from '../strict-input.ts'
 import { writeAuth } from '../write-auth.ts'
 
 const Summary = z.record(z.string(), z.number()).openapi('ModelSummary')
 const Version = z
-  .object({ version: z.number().int(), sha256: z.string(), bytes: z.number().int(), createdAt: z.string(), summary: Summary })
+  .object({
+    version: z.number().int(),
+    sha256: z.string(),
+    bytes: z.number().int(),
+    createdAt: z.string(),
+    summary: Summary,
+  })
   .openapi('ModelVersion')
 const Listing = z
-  .object({ name: z.string(), embedded: z.boolean(), default: z.boolean(), served: z.number().int().nullable(), summary: Summary })
+  .object({
+    name: z.string(),
+    embedded: z.boolean(),
+    default: z.boolean(),
+    served: z.number().int().nullable(),
+    summary: Summary,
+  })
   .openapi('ModelListing')
-const NameParam = z.object({ name: z.string().openapi({ param: { name: 'name', in: 'path' }, example: 'demo' }) })
+const NameParam = z.object({
+  name: z.string().openapi({ param: { name: 'name', in: 'path' }, example: 'demo' }),
+})
 const VersionParams = NameParam.extend({
-  v: z.coerce.number().int().positive().openapi({ param: { name: 'v', in: 'path' }, example: 2 }),
+  v: z.coerce
+    .number()
+    .int()
+    .positive()
+    .openapi({ param: { name: 'v', in: 'path' }, example: 2 }),
 })
 const Described = z
-  .object({ name: z.string(), embedded: z.boolean(), served: z.number().int().nullable(), versions: z.array(Version) })
+  .object({
+    name: z.string(),
+    embedded: z.boolean(),
+    served: z.number().int().nullable(),
+    versions: z.array(Version),
+  })
   .openapi('ModelVersions')
 const bearer = [{ bearer: [] as string[] }]
 
@@ -28,7 +51,12 @@ const listRoute = createRoute({
   method: 'get',
   path: '/v1/models',
   summary: 'Every model served: embedded ones and published ones, with the version served and its summary',
-  responses: { 200: { description: 'Models', content: { 'application/json': { schema: z.object({ models: z.array(Listing) }) } } } },
+  responses: {
+    200: {
+      description: 'Models',
+      content: { 'application/json': { schema: z.object({ models: z.array(Listing) }) } },
+    },
+  },
 })
 
 const describeRoute = createRoute({
@@ -36,7 +64,10 @@ const describeRoute = createRoute({
   path: '/v1/models/{name}',
   summary: 'A model: the version served and every stored version',
   request: { params: NameParam },
-  responses: { 200: { description: 'Versions', content: { 'application/json': { schema: Described } } }, ...errorResponses(400, 404) },
+  responses: {
+    200: { description: 'Versions', content: { 'application/json': { schema: Described } } },
+    ...errorResponses(400, 404),
+  },
 })
 
 const publishRoute = createRoute({
@@ -48,10 +79,16 @@ const publishRoute = createRoute({
   request: {
     params: NameParam,
     // A plain schema, not zod: the file is read and checked by the store, not by a JSON validator.
-    body: { required: true, content: { [MODEL_MEDIA_TYPE]: { schema: { type: 'string', format: 'binary' } } } },
+    body: {
+      required: true,
+      content: { [MODEL_MEDIA_TYPE]: { schema: { type: 'string', format: 'binary' } } },
+    },
   },
   responses: {
-    201: { description: 'Published and served', content: { 'application/json': { schema: Version.extend({ name: z.string() }) } } },
+    201: {
+      description: 'Published and served',
+      content: { 'application/json': { schema: Version.extend({ name: z.string() }) } },
+    },
     ...errorResponses(400, 401, 409, 413, 415, 422, 503),
   },
 })
@@ -78,9 +115,14 @@ export function registerModelRoutes(app: OpenAPIHono<AppEnv>): void {
   app.openapi(publishRoute, async (c) => {
     const { name } = c.req.valid('param')
     if (!MODEL_MEDIA_TYPES.includes(mediaType(c))) {
-      throw new ApiError(415, 'unsupported-media-type', `send a model file as ${MODEL_MEDIA_TYPE} (made by \`formfold learn\`)`, {
-        contentType: c.req.header('content-type') ?? null,
-      })
+      throw new ApiError(
+        415,
+        'unsupported-media-type',
+        `send a model file as ${MODEL_MEDIA_TYPE} (made by \`formfold learn\`)`,
+        {
+          contentType: c.req.header('content-type') ?? null,
+        },
+      )
     }
     const bytes = await readBytes(c, MAX_MODEL_BYTES, 'formfold publish --local')
     const info = await c.var.models.publish(name, bytes)

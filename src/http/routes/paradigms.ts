@@ -8,10 +8,20 @@ import { errorResponses, ModelQuery, Upos } from '../schemas/common.ts'
 import { useModel } from '../use-model.ts'
 
 const ParadigmLine = z
-  .object({ id: z.string(), upos: z.string(), lemma: z.string(), cells: z.number().int(), members: z.number().int(), examples: z.array(z.string()) })
+  .object({
+    id: z.string(),
+    upos: z.string(),
+    lemma: z.string(),
+    cells: z.number().int(),
+    members: z.number().int(),
+    examples: z.array(z.string()),
+  })
   .openapi('ParadigmLine')
 const ParadigmRules = ParadigmLine.omit({ cells: true })
-  .extend({ openPrefix: z.boolean(), cells: z.array(z.object({ feats: z.string(), rule: z.array(z.string()) })) })
+  .extend({
+    openPrefix: z.boolean(),
+    cells: z.array(z.object({ feats: z.string(), rule: z.array(z.string()) })),
+  })
   .openapi('Paradigm')
 
 const listRoute = createRoute({
@@ -20,7 +30,10 @@ const listRoute = createRoute({
   summary: 'The paradigm book: each paradigm with its lemma shape, cell count, members and example lemmas',
   request: { query: z.object({ model: ModelQuery, upos: Upos.optional() }) },
   responses: {
-    200: { description: 'Paradigms', content: { 'application/json': { schema: z.object({ paradigms: z.array(ParadigmLine) }) } } },
+    200: {
+      description: 'Paradigms',
+      content: { 'application/json': { schema: z.object({ paradigms: z.array(ParadigmLine) }) } },
+    },
     ...errorResponses(400, 404),
   },
 })
@@ -30,15 +43,30 @@ const oneRoute = createRoute({
   path: '/v1/paradigms/{id}',
   summary: 'One paradigm: the rule that makes each cell from the stems (x1, x2…)',
   request: {
-    params: z.object({ id: z.string().max(128).openapi({ param: { name: 'id', in: 'path' }, example: 'NOUN-1' }) }),
+    params: z.object({
+      id: z
+        .string()
+        .max(128)
+        .openapi({ param: { name: 'id', in: 'path' }, example: 'NOUN-1' }),
+    }),
     query: z.object({ model: ModelQuery }),
   },
-  responses: { 200: { description: 'The paradigm', content: { 'application/json': { schema: ParadigmRules } } }, ...errorResponses(400, 404) },
+  responses: {
+    200: { description: 'The paradigm', content: { 'application/json': { schema: ParadigmRules } } },
+    ...errorResponses(400, 404),
+  },
 })
 
 /** One line of the book. */
 export function paradigmLine(p: Paradigm): z.infer<typeof ParadigmLine> {
-  return { id: p.id, upos: p.upos, lemma: showPattern(p.lemma), cells: p.cells.length, members: p.members, examples: p.examples }
+  return {
+    id: p.id,
+    upos: p.upos,
+    lemma: showPattern(p.lemma),
+    cells: p.cells.length,
+    members: p.members,
+    examples: p.examples,
+  }
 }
 
 /**
@@ -49,7 +77,9 @@ export function registerParadigms(app: OpenAPIHono<AppEnv>): void {
   app.openapi(listRoute, async (c) => {
     const { model: name, upos } = c.req.valid('query')
     const { model } = await useModel(c, name)
-    const paradigms = model.inflection.book.paradigms.filter((p) => !upos || p.upos === upos).map(paradigmLine)
+    const paradigms = model.inflection.book.paradigms
+      .filter((p) => !upos || p.upos === upos)
+      .map(paradigmLine)
     return c.json({ paradigms }, 200)
   })
 
@@ -59,6 +89,17 @@ export function registerParadigms(app: OpenAPIHono<AppEnv>): void {
     const p = model.inflection.book.paradigms.find((x) => x.id === id)
     if (!p) throw new ApiError(404, 'unknown-paradigm', `the model has no paradigm "${id}"`, { id })
     const { lemma, cells } = describeParadigm(p)
-    return c.json({ id: p.id, upos: p.upos, lemma, openPrefix: p.openPrefix, members: p.members, examples: p.examples, cells }, 200)
+    return c.json(
+      {
+        id: p.id,
+        upos: p.upos,
+        lemma,
+        openPrefix: p.openPrefix,
+        members: p.members,
+        examples: p.examples,
+        cells,
+      },
+      200,
+    )
   })
 }

@@ -4,6 +4,7 @@ import { canonicalizeFeats, isUpos } from '../../core/lexicon/feats.ts'
 import { MAX_FORM_CHARS, MAX_MODEL_NAME_CHARS } from '../limits.ts'
 
 // C0 controls, DEL and C1 controls: never part of a word form.
+// biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is its purpose
 const CONTROL = /[\u0000-\u001F\u007F-\u009F]/
 
 /** A model name as a query parameter: `?model=` (default: the default model). */
@@ -12,7 +13,11 @@ export const ModelQuery = z
   .regex(/^[a-z0-9][a-z0-9._-]*$/, 'a model name is lowercase letters, digits, ".", "_" or "-"')
   .max(MAX_MODEL_NAME_CHARS)
   .optional()
-  .openapi({ param: { name: 'model', in: 'query' }, example: 'demo', description: 'Model name (default: the demo model).' })
+  .openapi({
+    param: { name: 'model', in: 'query' },
+    example: 'demo',
+    description: 'Model name (default: the demo model).',
+  })
 
 /** One word form: non-empty, at most `MAX_FORM_CHARS`, no control characters or NUL. */
 export const Form = z
@@ -60,7 +65,13 @@ export const Candidate = z
 
 /** One form of a table: attested (from the dictionary) or predicted (from a paradigm), with its score. */
 export const TableForm = z
-  .object({ form: z.string(), feats: z.string(), cell: z.string(), source: z.enum(['attested', 'predicted']), score: z.number() })
+  .object({
+    form: z.string(),
+    feats: z.string(),
+    cell: z.string(),
+    source: z.enum(['attested', 'predicted']),
+    score: z.number(),
+  })
   .openapi('TableForm')
 
 /** A lemma's table. */
@@ -74,7 +85,11 @@ export const Table = z
     score: z.number(),
     forms: z.array(TableForm),
     alternatives: z.array(
-      z.object({ paradigm: z.string(), score: z.number(), cells: z.array(z.object({ key: z.string(), forms: z.array(z.string()) })) }),
+      z.object({
+        paradigm: z.string(),
+        score: z.number(),
+        cells: z.array(z.object({ key: z.string(), forms: z.array(z.string()) })),
+      }),
     ),
   })
   .openapi('Table')
@@ -103,6 +118,9 @@ export function errorResponses(...statuses: (400 | 401 | 404 | 409 | 413 | 415 |
     503: 'Storage failed; what was served before still is.',
   }
   return Object.fromEntries(
-    statuses.map((s) => [s, { description: describe[s]!, content: { 'application/json': { schema: ErrorBody } } }]),
+    statuses.map((s) => [
+      s,
+      { description: describe[s]!, content: { 'application/json': { schema: ErrorBody } } },
+    ]),
   )
 }

@@ -64,7 +64,9 @@ export class ModelStore<M> {
   /** Names that have a served version, sorted. */
   async names(): Promise<string[]> {
     const keys = await this.#blobs.list(ROOT)
-    return keys.filter((b) => b.key.endsWith('/pointer.json')).map((b) => b.key.slice(ROOT.length, -'/pointer.json'.length))
+    return keys
+      .filter((b) => b.key.endsWith('/pointer.json'))
+      .map((b) => b.key.slice(ROOT.length, -'/pointer.json'.length))
   }
 
   /** The pointer of a name, or null when nothing is published under it. */
@@ -90,7 +92,15 @@ export class ModelStore<M> {
       } catch {
         // a version without a readable summary is still listed, so it can be deleted
       }
-      return [{ version: Number(m[1]), sha256: b.meta.sha256 ?? '', bytes: b.size, createdAt: b.meta.createdAt ?? '', summary }]
+      return [
+        {
+          version: Number(m[1]),
+          sha256: b.meta.sha256 ?? '',
+          bytes: b.size,
+          createdAt: b.meta.createdAt ?? '',
+          summary,
+        },
+      ]
     })
   }
 
@@ -124,17 +134,29 @@ export class ModelStore<M> {
       await this.#blobs.put(key, bytes, { sha256, createdAt, summary: JSON.stringify(summary) })
       back = await this.#blobs.get(key)
     } catch (err) {
-      throw storeFailed(`version ${version} of "${name}" could not be written; the served version is unchanged`, err)
+      throw storeFailed(
+        `version ${version} of "${name}" could not be written; the served version is unchanged`,
+        err,
+      )
     }
     if (!back || (await sha256Hex(back.bytes)) !== sha256) {
       await this.#blobs.delete(key).catch(() => undefined)
-      throw new ApiError(503, 'store-failed', `version ${version} of "${name}" did not read back intact; the served version is unchanged`)
+      throw new ApiError(
+        503,
+        'store-failed',
+        `version ${version} of "${name}" did not read back intact; the served version is unchanged`,
+      )
     }
     const pointer: Pointer = { version, sha256, movedAt: new Date().toISOString() }
     try {
-      await this.#blobs.put(pointerKey(name), new TextEncoder().encode(JSON.stringify(pointer)), { version: String(version) })
+      await this.#blobs.put(pointerKey(name), new TextEncoder().encode(JSON.stringify(pointer)), {
+        version: String(version),
+      })
     } catch (err) {
-      throw storeFailed(`the pointer of "${name}" could not be moved to version ${version}; the served version is unchanged`, err)
+      throw storeFailed(
+        `the pointer of "${name}" could not be moved to version ${version}; the served version is unchanged`,
+        err,
+      )
     }
     return { version, sha256, bytes: bytes.byteLength, createdAt, summary, model }
   }
@@ -152,7 +174,11 @@ export class ModelStore<M> {
       sha256 = pointer.sha256
     }
     const blob = await this.#blobs.get(versionKey(name, version))
-    if (!blob) throw new ApiError(404, 'unknown-version', `model "${name}" has no version ${version}`, { model: name, version })
+    if (!blob)
+      throw new ApiError(404, 'unknown-version', `model "${name}" has no version ${version}`, {
+        model: name,
+        version,
+      })
     sha256 ??= blob.meta.sha256
     if ((await sha256Hex(blob.bytes)) !== sha256) {
       throw new ApiError(503, 'store-failed', `version ${version} of "${name}" does not match its hash`)
@@ -164,11 +190,18 @@ export class ModelStore<M> {
   async deleteVersion(name: string, version: number): Promise<void> {
     const pointer = await this.pointer(name)
     if (pointer?.version === version) {
-      throw new ApiError(409, 'version-served', `version ${version} of "${name}" is the one served; publish another first`)
+      throw new ApiError(
+        409,
+        'version-served',
+        `version ${version} of "${name}" is the one served; publish another first`,
+      )
     }
     const key = versionKey(name, version)
     if (!(await this.#blobs.list(key)).some((b) => b.key === key)) {
-      throw new ApiError(404, 'unknown-version', `model "${name}" has no version ${version}`, { model: name, version })
+      throw new ApiError(404, 'unknown-version', `model "${name}" has no version ${version}`, {
+        model: name,
+        version,
+      })
     }
     await this.#blobs.delete(key)
   }
