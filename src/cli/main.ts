@@ -1,5 +1,6 @@
 // The formfold command line: one subcommand per file, each a thin wrapper over a core function.
 import { Command } from 'commander'
+import { registerAnalyze } from './analyze-command.ts'
 import { registerEvaluate } from './evaluate-command.ts'
 import { registerExpand } from './expand-command.ts'
 import { registerLearn } from './learn-command.ts'
@@ -22,6 +23,7 @@ const program = new Command('formfold')
 
 registerLearn(program)
 registerExpand(program)
+registerAnalyze(program)
 registerEvaluate(program)
 registerConstrain(program)
 registerServe(program)

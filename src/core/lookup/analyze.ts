@@ -59,7 +59,18 @@ export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptio
   const guesser = { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser }
   const guesses = guessForm(model, tiers[0] ?? [], minScore, guesser)
   const how = [...new Set(guesses.map((g) => g.how))]
-  const found = [guesses.map(({ how: _, ...g }): Candidate => ({ ...g, source: 'guessed' }))]
+  const found = [
+    guesses.map(
+      (g): Candidate => ({
+        lemma: g.lemma,
+        upos: g.upos,
+        feats: g.feats,
+        source: 'guessed',
+        score: g.score,
+        paradigm: g.paradigm,
+      }),
+    ),
+  ]
   return { form, normalized: how, candidates: boundCandidates(mergeCandidates(found), top, minScore) }
 }
 
