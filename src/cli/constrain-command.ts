@@ -17,7 +17,9 @@ interface RawOptions {
   sources?: CandidateSource[]
   bestSourceOnly?: boolean
   excludeGold?: string[]
-  top: number
+  reportTop: number
+  top?: number
+  guess: boolean
   conllu?: string
   tokenTags?: string
   allowedKey: string
@@ -77,7 +79,9 @@ export function registerConstrain(program: Command): void {
       'report figures leave out tokens with these gold UPOS (e.g. PUNCT,NUM,SYM)',
       list(UPOS_TAGS, 'a UPOS tag'),
     )
-    .option('--top <n>', 'uncovered forms and gold misses listed in the report', number, 20)
+    .option('--top <n>', 'lookup: at most n predicted or guessed candidates per form', number)
+    .option('--no-guess', 'lookup: no guesses for forms the model does not index (they stay unconstrained)')
+    .option('--report-top <n>', 'uncovered forms and gold misses listed in the report', number, 20)
     .option('--conllu <file>', 'also write the CoNLL-U corpus with allowed UPOS in MISC')
     .option('--token-tags <where>', 'couple with per-token tags read from upos or misc:KEY (needs --conllu)')
     .option('--allowed-key <name>', 'MISC attribute for the allowed tags', 'Allowed')
@@ -124,8 +128,9 @@ function checked(corpus: string | undefined, o: RawOptions): ConstrainRun {
       sources: o.sources as CandidateSource[] | undefined,
       bestSourceOnly: Boolean(o.bestSourceOnly),
       excludeGold: o.excludeGold,
-      top: o.top,
+      top: o.reportTop,
     },
+    lookup: { top: o.top, minScore: o.minScore, guess: o.guess },
     conllu: o.conllu ? { path: o.conllu, tokenTags, key: o.allowedKey } : undefined,
     skipBad: Boolean(o.skipBad),
   }

@@ -2,11 +2,10 @@
 import { createHash } from 'node:crypto'
 import { readFile } from 'node:fs/promises'
 import { basename } from 'node:path'
-import type { Analyzer, Candidate } from '../core/constrain/index.ts'
-import { lookupTiers } from '../core/lookup/normalize.ts'
+import type { Analyzer } from '../core/constrain/index.ts'
+import { type AnalyzeOptions, analyzeForm } from '../core/lookup/analyze.ts'
 import { decodeModel } from '../core/model/decode-model.ts'
 import { MODEL_VERSION } from '../core/model/encode-model.ts'
-import type { Model } from '../core/model/model.ts'
 import { EXIT } from './io.ts'
 
 /** What the command needs of a model file. */
@@ -23,7 +22,7 @@ export interface ConstrainModel {
  * Read a model file (exit 2 when it is missing; a bad file throws its `bad-model` problem).
  * @example const { analyzer } = await loadConstrainModel('en.model.json')
  */
-export async function loadConstrainModel(path: string): Promise<ConstrainModel> {
+export async function loadConstrainModel(path: string, lookup: AnalyzeOptions = {}): Promise<ConstrainModel> {
   let text: string
   try {
     text = await readFile(path, 'utf8')
@@ -40,22 +39,7 @@ export async function loadConstrainModel(path: string): Promise<ConstrainModel> 
       .replace(/\.model$/i, ''),
     version,
     digest: `sha256:${createHash('sha256').update(text).digest('hex').slice(0, 16)}`,
-    analyzer: indexAnalyzer(model),
+    analyzer: (form) => analyzeForm(model, form, lookup).candidates,
     forms: () => model.index.forms(),
-  }
-}
-
-/** Index lookup through the normalization tiers: attested and predicted analyses (no guesses). */
-export function indexAnalyzer(model: Model): Analyzer {
-  return (form) => {
-    for (const tier of lookupTiers(form)) {
-      const found: Candidate[] = []
-      for (const key of tier) {
-        if (key.folded) continue
-        for (const a of model.index.get(key.key) ?? []) found.push(a)
-      }
-      if (found.length > 0) return found
-    }
-    return []
   }
 }

@@ -20,6 +20,7 @@ import {
   writeConstraintFile,
 } from '../core/constrain/index.ts'
 import { formatProblem, type Problem, ProblemError } from '../core/lexicon/problem.ts'
+import { type AnalyzeOptions, DEFAULT_MIN_SCORE, DEFAULT_TOP } from '../core/lookup/analyze.ts'
 import type { CorpusFormat } from '../formats/corpus-reader.ts'
 import { readLines } from '../formats/line-reader.ts'
 import {
@@ -43,6 +44,8 @@ export interface ConstrainRun {
   corpusFormat?: CorpusFormat
   options: ConstrainOptions & ReportOptions
   conllu?: { path: string; tokenTags?: TokenTagSource; key: string }
+  /** Options of lookup (`analyzeForm`): candidate bound, score floor, guessing. */
+  lookup: AnalyzeOptions
   skipBad: boolean
 }
 
@@ -52,12 +55,17 @@ export interface ConstrainRun {
  */
 export async function runConstrain(run: ConstrainRun): Promise<void> {
   if (run.corpus !== null && run.corpus !== '-') await mustExist(run.corpus, 'corpus')
-  const model = await loadConstrainModel(run.model)
+  const model = await loadConstrainModel(run.model, run.lookup)
   const progress = terminalProgress()
   const header = (corpus: ConstraintFileHeader['corpus']): ConstraintFileHeader => ({
     model: { name: model.name, version: model.version, digest: model.digest },
     corpus,
     options: stripReportOptions(run.options),
+    lookup: {
+      top: run.lookup.top ?? DEFAULT_TOP,
+      minScore: run.lookup.minScore ?? DEFAULT_MIN_SCORE,
+      guess: run.lookup.guess ?? true,
+    },
   })
 
   if (run.corpus === null) {
@@ -161,7 +169,11 @@ function summaryFacts(
   return {
     model: { name: model.name, version: model.version, digest: model.digest },
     corpus: { file: inputName(run.corpus!), format, lines: read.lines, skipped: read.skipped },
-    options: { ...stripReportOptions(run.options), excludeGold: run.options.excludeGold ?? [] },
+    options: {
+      ...stripReportOptions(run.options),
+      excludeGold: run.options.excludeGold ?? [],
+      lookup: run.lookup,
+    },
   }
 }
 

@@ -17,6 +17,8 @@ export interface ConstraintFileHeader {
   /** The corpus, or null for the whole-lexicon file (every form the model knows). */
   corpus: { file: string; tokens: number; types: number } | null
   options: ConstrainOptions
+  /** The lookup's own settings (candidate bound, score floor, guessing), written as given. */
+  lookup?: Record<string, string | number | boolean>
 }
 
 /** The TSV column names: the line after the header comments; every line after it is a row. */
@@ -35,6 +37,17 @@ export function describeOptions(options: ConstrainOptions): string {
 }
 
 /**
+ * Lookup settings as one `name=value` line, in the order given.
+ * @example describeLookup({ top: 8, guess: true }) // 'top=8 guess=yes'
+ */
+export function describeLookup(lookup: Record<string, string | number | boolean>): string {
+  const value = (v: string | number | boolean) => (v === true ? 'yes' : v === false ? 'no' : String(v))
+  return Object.entries(lookup)
+    .map(([k, v]) => `${k.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}=${value(v)}`)
+    .join(' ')
+}
+
+/**
  * The header comment lines of the TSV file (each `# …`), ending with the column-name line.
  * @example constraintHeaderLines(header)[1] // '# model: english, version 3'
  */
@@ -49,6 +62,7 @@ export function constraintHeaderLines(header: ConstraintFileHeader): string[] {
       ? `# corpus: ${oneLine(corpus.file)}, ${corpus.tokens} tokens, ${corpus.types} form types`
       : '# corpus: none; every form the model knows (count 0)',
     `# options: ${describeOptions(options)}`,
+    ...(header.lookup ? [`# lookup: ${describeLookup(header.lookup)}`] : []),
     `# allowed: ${tags} joined with "${sep}"; "${UNCONSTRAINED_MARK}" = unconstrained, every tag allowed (no candidate)`,
     '# source: best source of the form analyses (attested, predicted or guessed; predicted and guessed are hypotheses), none = no candidate',
     CONSTRAINT_COLUMNS.join('\t'),
@@ -102,6 +116,7 @@ export function* writeConstraintFile(
     model: header.model,
     corpus: header.corpus,
     options: { ...header.options, described: describeOptions(header.options) },
+    lookup: header.lookup ?? null,
     allowed: 'tags at the level; null = unconstrained, every tag allowed (no candidate)',
   }
   yield `${JSON.stringify({ meta })}\n`

@@ -37,6 +37,8 @@ export interface TypeConstraint {
   analyses: Analysis[]
 }
 
+const WORD_LETTER = /\p{L}/u
+
 /** Which contexts a form occurred in; lookup is asked once per context seen. */
 export interface FormContexts {
   plain: boolean
@@ -53,7 +55,8 @@ export function tagOf(analysis: { upos: string; feats: string }, level: Constrai
 
 /**
  * The constraint of a form: the union of lookup's candidates over the contexts it occurred in, filtered
- * by the options, one analysis per (lemma, UPOS, FEATS) with its best source and score.
+ * by the options, one analysis per (lemma, UPOS, FEATS) with its best source and score. Guesses count
+ * only for forms with a letter: a token of punctuation or digits that no table lists stays unconstrained.
  * @example
  * constrainForm(analyzer, 'vessat', { plain: true, initial: false }, { level: 'upos' }, 12)
  * // { form: 'vessat', count: 12, source: 'predicted', allowed: ['NOUN'], analyses: [...] }
@@ -68,7 +71,9 @@ export function constrainForm(
   const found: Candidate[] = []
   if (contexts.plain || !contexts.initial) found.push(...analyzer(form, { sentenceInitial: false }))
   if (contexts.initial) found.push(...analyzer(form, { sentenceInitial: true }))
-  const analyses = keptAnalyses(found, options)
+  // A guess rewrites a word's letters; for a token with none (punctuation, digits) it is noise.
+  const guessable = WORD_LETTER.test(form)
+  const analyses = keptAnalyses(guessable ? found : found.filter((c) => c.source !== 'guessed'), options)
   if (analyses.length === 0) return { form, count, source: 'none', allowed: null, analyses }
   const allowed = [...new Set(analyses.map((a) => tagOf(a, options.level)))].sort()
   return { form, count, source: analyses[0]!.source, allowed, analyses }

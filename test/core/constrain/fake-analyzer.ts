@@ -32,6 +32,8 @@ export const FAKE_LEXICON: Record<string, Candidate[]> = {
   ],
   Velmora: [c('Velmora', 'PROPN', 'Case=Nom|Number=Sing', 'guessed', 0.6)],
   '.': [c('.', 'PUNCT', '_', 'attested')],
+  '?': [c('?', 'NOUN', 'Number=Sing', 'guessed', 0.4)],
+  '12': [c('12', 'NOUN', 'Number=Sing', 'guessed', 0.4)],
 }
 
 /**

@@ -29,6 +29,8 @@ describe('constrainForm', () => {
       'attested',
       ['NOUN'],
     ],
+    ['no guesses for punctuation', '?', plain, upos, 'none', null],
+    ['no guesses for digits', '12', plain, upos, 'none', null],
     ['best source only', 'kūmele', plain, { level: 'upos', bestSourceOnly: true }, 'predicted', ['ADJ']],
     [
       'guesses not allowed to constrain',
