@@ -2,7 +2,7 @@
 import type { Command } from 'commander'
 import { buildLexicon, learnForEvaluation, scoreInflection } from '../core/index.ts'
 import { lookupMetrics } from '../core/lookup/lookup-metrics.ts'
-import { readSources, runCommand } from './io.ts'
+import { readSources, reportSkipped, runCommand } from './io.ts'
 
 /** The protocol's keys, in order. */
 const KEYS = [
@@ -30,14 +30,22 @@ export function registerEvaluate(program: Command): void {
     .action((opts: { train: string; test: string; json?: boolean; skipBad?: boolean }) =>
       runCommand(async () => {
         const skipBad = Boolean(opts.skipBad)
-        const train = buildLexicon((await readSources([opts.train], { skipBad })).entries)
-        const test = buildLexicon((await readSources([opts.test], { skipBad })).entries)
+        const trainRead = await readSources([opts.train], { skipBad })
+        const testRead = await readSources([opts.test], { skipBad })
+        reportSkipped(trainRead)
+        reportSkipped(testRead)
+        const train = buildLexicon(trainRead.entries)
+        const test = buildLexicon(testRead.entries)
         const t0 = performance.now()
         const model = learnForEvaluation(train)
         const learnSeconds = (performance.now() - t0) / 1000
         const s = scoreInflection(model, test)
         const lookup = lookupMetrics(model, test)
-        const result: Record<string, number | null> = { ...s, ...lookup, learnSeconds: round(learnSeconds, 2) }
+        const result: Record<string, number | null> = {
+          ...s,
+          ...lookup,
+          learnSeconds: round(learnSeconds, 2),
+        }
         const ordered = Object.fromEntries(KEYS.map((k) => [k, result[k] ?? null]))
         if (opts.json) process.stdout.write(`${JSON.stringify(ordered)}\n`)
         else for (const k of KEYS) process.stdout.write(`${k.padEnd(22)}${fmt(ordered[k])}\n`)

@@ -3,7 +3,7 @@ import type { Command } from 'commander'
 import { type Entry, type ExpandedTable, expandLemma, ProblemError } from '../core/index.ts'
 import type { Model } from '../core/model/model.ts'
 import { formatJsonLine, formatTableRow } from '../formats/index.ts'
-import { readSources, runCommand } from './io.ts'
+import { readSources, reportSkipped, runCommand } from './io.ts'
 import { loadModelFile } from './model-file.ts'
 
 export function registerExpand(program: Command): void {
@@ -26,7 +26,12 @@ export function registerExpand(program: Command): void {
           throw new ProblemError({ code: 'bad-entry', message: '--alternatives must be an integer from 0 to 20' })
         }
         const model = await loadModelFile(opts.model)
-        const wanted = lemmas ? (await readSources([lemmas], { skipBad: Boolean(opts.skipBad), format: 'lemmas' })).entries : bareLemmas(model)
+        let wanted = bareLemmas(model)
+        if (lemmas) {
+          const read = await readSources([lemmas], { skipBad: Boolean(opts.skipBad), format: 'lemmas' })
+          reportSkipped(read)
+          wanted = read.entries
+        }
         const out = process.stdout
         for (const e of wanted) {
           const table = expandLemma(model.inflection, e.lemma, e.upos, e.feats, { alternatives })

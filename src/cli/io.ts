@@ -17,13 +17,19 @@ export interface SourcesRead {
 }
 
 /** Read every source file (table rows, entries, lemma lists; format sniffed per file unless given). */
-export async function readSources(paths: string[], opts: { skipBad: boolean; format?: LexiconFormat }): Promise<SourcesRead> {
+export async function readSources(
+  paths: string[],
+  opts: { skipBad: boolean; format?: LexiconFormat },
+): Promise<SourcesRead> {
   const out: SourcesRead = { entries: [], skipped: 0, problems: [], languageSpecific: [] }
   for (const path of paths) {
+    const file = path === '-' ? '<stdin>' : path
     const r = await readLexicon(path === '-' ? process.stdin : createReadStream(path), {
-      file: path === '-' ? '<stdin>' : path,
+      file,
       skipBad: opts.skipBad,
       format: opts.format,
+    }).catch((err: unknown) => {
+      throw unreadable(err, file)
     })
     out.entries.push(...r.entries)
     out.skipped += r.skipped
@@ -31,6 +37,17 @@ export async function readSources(paths: string[], opts: { skipBad: boolean; for
     for (const f of r.languageSpecific) if (!out.languageSpecific.includes(f)) out.languageSpecific.push(f)
   }
   return out
+}
+
+/** Errors of opening a path the user named: bad usage (exit 2), not a failure of formfold. */
+const USAGE_ERRORS = new Set(['ENOENT', 'EISDIR', 'ENOTDIR', 'EACCES', 'EPERM'])
+
+/** A file that cannot be opened as a ProblemError naming it; any other error as it is. */
+function unreadable(err: unknown, file: string): unknown {
+  const code = (err as NodeJS.ErrnoException | undefined)?.code
+  if (err instanceof ProblemError || code === undefined || !USAGE_ERRORS.has(code)) return err
+  const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'is a directory' : code
+  return new ProblemError({ code: 'unreadable-file', file, message: `cannot read the file (${why})` })
 }
 
 /** Write a file under a temporary name and rename it when complete: no partial output, ever. */
@@ -41,7 +58,8 @@ export async function writeAtomic(path: string, data: string | Uint8Array): Prom
     await rename(tmp, path)
   } catch (err) {
     await rm(tmp, { force: true })
-    throw err
+    // Name the file the user asked for, not the temporary one.
+    throw new Error(`cannot write ${path}: ${(err as NodeJS.ErrnoException).code ?? String(err)}`)
   }
 }
 

@@ -1,5 +1,6 @@
 // `formfold learn SOURCES… -o MODEL`: tables, entries and lemma lists in; a model file out; summary on stderr.
 import type { Command } from 'commander'
+import { formatProblem } from '../core/index.ts'
 import { buildModel } from '../core/model/build-model.ts'
 import { encodeModel } from '../core/model/encode-model.ts'
 import { readSources, reportSkipped, runCommand, writeAtomic } from './io.ts'
@@ -20,17 +21,19 @@ export function registerLearn(program: Command): void {
         await writeAtomic(opts.output, text)
         const lex = model.inflection.lexicon
         const tables = lex.entries.filter((e) => e.cells).length
+        const predicted = model.kept.filter((k) => k && k.length > 0).length
+        const unfit = lex.entries.length - tables - predicted
         const forms = model.index.formCount
         const seconds = ((performance.now() - t0) / 1000).toFixed(1)
         process.stderr.write(
           `learned ${model.inflection.book.paradigms.length} paradigms from ${tables} tables; ` +
-            `${lex.entries.length - tables} lemma-only entries got predicted tables; ${forms} forms indexed; ` +
-            `${text.length} bytes → ${opts.output} in ${seconds} s\n`,
+            `${predicted} lemma-only entries got predicted tables${unfit > 0 ? ` (${unfit} fit no learned paradigm)` : ''}; ` +
+            `${forms} forms indexed; ${Buffer.byteLength(text)} bytes → ${opts.output} in ${seconds} s\n`,
         )
         if (read.languageSpecific.length > 0) {
           process.stderr.write(`language-specific features: ${read.languageSpecific.join(' ')}\n`)
         }
-        for (const p of lex.problems) process.stderr.write(`note: ${p.file ?? ''}${p.line ? `:${p.line}` : ''} ${p.message}\n`)
+        for (const p of lex.problems) process.stderr.write(`note: ${formatProblem(p)}\n`)
         reportSkipped(read)
       }),
     )

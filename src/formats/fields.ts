@@ -22,13 +22,21 @@ export function problemAt(code: ProblemCode, message: string, at: Where): Proble
   return { code, message, file: at.file, line: at.line }
 }
 
+/**
+ * Longest lemma or form, in UTF-16 code units after NFC (the HTTP API's form limit is the same). Aligning a
+ * lemma with a form costs their product in time and memory, so without a bound one long line could take
+ * minutes or exhaust memory while learning.
+ */
+export const MAX_WORD_CHARS = 256
+
 // biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is its purpose
 const CONTROL_OR_TAB = /[\u0000-\u001F\u007F]/
 const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/
 
 /**
  * Check a lemma or form: not blank, and (for values decoded from JSON escapes) no control characters,
- * tabs or lone surrogates, which no TSV line could carry. Returns the NFC value or a problem.
+ * tabs or lone surrogates, which no TSV line could carry; at most `MAX_WORD_CHARS` long. Returns the NFC
+ * value or a problem.
  * @example checkWord('ha\u0308us', 'lemma', at) // { value: 'häus' }
  */
 export function checkWord(value: string, field: string, at: Where): { value: string } | { problem: Problem } {
@@ -41,7 +49,12 @@ export function checkWord(value: string, field: string, at: Where): { value: str
   if (LONE_SURROGATE.test(value)) {
     return { problem: problemAt('bad-utf8', `${field} contains a lone surrogate`, at) }
   }
-  return { value: value.normalize('NFC') }
+  const nfc = value.normalize('NFC')
+  if (nfc.length > MAX_WORD_CHARS) {
+    const message = `${field} is ${nfc.length} characters long (at most ${MAX_WORD_CHARS})`
+    return { problem: problemAt('word-too-long', message, at) }
+  }
+  return { value: nfc }
 }
 
 /**

@@ -33,7 +33,8 @@ export interface Lexicon {
  *   constant over a table and not inflectional are its inherent features (so a noun with no plural keeps
  *   Number in its cells);
  * - two JSON entries giving different tables for the same lemma are both kept (their rows are unioned)
- *   and reported as a `conflict`, so nothing is lost silently;
+ *   and reported as a `conflict`, so nothing is lost silently; so are two different values of one
+ *   inherent feature (`Gender=Fem` and `Gender=Masc` give `Gender=Fem,Masc`);
  * - the order is canonical (entries by UPOS then lemma, cells by FEATS; variants keep the source's order),
  *   so reordering input rows never changes the result.
  * @example buildLexicon([{lemma:'Aal',upos:'NOUN',feats:'_'}]).entries[0].cells // null
@@ -48,7 +49,17 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
       m = { entry: e, rows: [], tables: 0 }
       merged.set(key, m)
     } else if (e.feats !== '_' && m.entry.feats !== e.feats) {
-      m.entry = { ...m.entry, feats: mergeFeats(m.entry.feats, e.feats) }
+      // Sources disagreeing on an inherent feature keep both values, whatever their order (reported).
+      const { feats, clashes } = unionFeats(m.entry.feats, e.feats)
+      m.entry = { ...m.entry, feats }
+      if (clashes.length > 0) {
+        problems.push({
+          code: 'conflict',
+          file: e.file,
+          line: e.line,
+          message: `${e.lemma} (${e.upos}) is listed again with other ${clashes.join(', ')}; both values are kept (${feats})`,
+        })
+      }
     }
     if (e.forms) {
       const full = e.forms.map((f) => ({ form: f.form, feats: mergeFeats(e.feats, f.feats) }))
@@ -121,12 +132,25 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
   const sortedCellKeys: Record<string, string[]> = {}
   for (const upos of Object.keys(cellKeys).sort(cmp)) sortedCellKeys[upos] = cellKeys[upos]!
   const inflectional: Record<string, string[]> = {}
-  for (const [upos, set] of varying) inflectional[upos] = [...set].sort(compareFeatureKeys)
+  for (const upos of [...varying.keys()].sort(cmp))
+    inflectional[upos] = [...varying.get(upos)!].sort(compareFeatureKeys)
   return { entries, cellKeys: sortedCellKeys, inflectional, problems }
 }
 
 function cmp(a: string, b: string): number {
   return a < b ? -1 : a > b ? 1 : 0
+}
+
+/** Union of two canonical bundles; a feature with other values in each gets all of them (named in `clashes`). */
+function unionFeats(a: string, b: string): { feats: string; clashes: string[] } {
+  const map = parseFeats(a)
+  const clashes: string[] = []
+  for (const [name, values] of Object.entries(parseFeats(b))) {
+    const have = map[name]
+    if (have && have.join(',') !== values.join(',')) clashes.push(name)
+    map[name] = [...new Set([...(have ?? []), ...values])].sort(compareFeatureKeys)
+  }
+  return { feats: formatFeats(map), clashes }
 }
 
 function sameRows(a: { form: string; feats: string }[], b: { form: string; feats: string }[]): boolean {

@@ -12,6 +12,8 @@ export type ProblemCode =
   | 'nul-byte'
   | 'control-char'
   | 'line-too-long'
+  | 'word-too-long'
+  | 'unreadable-file'
   | 'no-entries'
   | 'conflict'
   | 'bad-conllu'
