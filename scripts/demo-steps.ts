@@ -118,6 +118,7 @@ export async function constrainDemoCorpus(): Promise<Constrained> {
     format: 'tsv',
     report: REPORT_FILE,
     options: { level: 'upos' },
+    lookup: {},
     skipBad: false,
   })
   const report = JSON.parse(await readFile(ROOT + REPORT_FILE, 'utf8'))
