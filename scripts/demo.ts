@@ -63,7 +63,9 @@ say(
     `ambiguity ${report.ambiguity.toFixed(2)}`,
 )
 // A sample row of each source: the most frequent attested, predicted, guessed and uncovered form types.
-const sample = ['attested', 'predicted', 'guessed', 'none'].map((src) => rows.find((r) => r[2] === src)).filter((r) => r !== undefined)
+const sample = ['attested', 'predicted', 'guessed', 'none']
+  .map((src) => rows.find((r) => r[2] === src))
+  .filter((r) => r !== undefined)
 say(indent(sample.map((r) => r.join('\t'))).join('\n'))
 
 let server: Awaited<ReturnType<typeof startNodeServer>>
