@@ -26,12 +26,13 @@ var { font-family: var(--mono); font-style: normal; font-weight: 700; color: var
   border-bottom: 2px solid var(--ink); }
 .paradigm-grid thead th { text-transform: none; letter-spacing: 0; font-family: var(--mono); font-size: .8rem; color: var(--ink); }
 .grid .num { text-align: right; font-variant-numeric: tabular-nums; }
+.candidates th, .candidates td { padding-left: .35rem; padding-right: .35rem; }
 .candidates tbody tr.row-predicted th { border-left: 4px dashed var(--predicted); }
 .candidates tbody tr.row-attested th { border-left: 4px solid var(--attested); }
 .candidates tbody tr.row-guessed th { border-left: 4px dotted var(--guessed); }
 
 .score { display: inline-flex; align-items: center; gap: .4rem; font-variant-numeric: tabular-nums; }
-.score-track { width: 3.5rem; height: .55rem; border: 1px solid var(--ink-soft); background: #fff; border-radius: 2px; overflow: hidden; }
+.score-track { width: 2.5rem; height: .55rem; border: 1px solid var(--ink-soft); background: #fff; border-radius: 2px; overflow: hidden; }
 .score-fill { display: block; height: 100%; background: var(--ink); }
 
 .lemma-table { border-top: 1px solid var(--rule); padding-top: .4rem; margin-top: .4rem; }
