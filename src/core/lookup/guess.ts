@@ -34,16 +34,19 @@ export interface GuessOptions {
   mass: number
   /** How much more likely a lemma the dictionary lists (without a table) is than an unknown one. */
   listedBoost: number
+  /** Added to each cell's share before renormalizing: the ranker is often sure of the wrong cell. */
+  cellSmoothing: number
   /** Exponent of the forward check P(form ∈ table(lemma)) beside the rewrite prior (0: ignore it). */
   forward: number
 }
 
 export const DEFAULT_GUESS_OPTIONS: GuessOptions = {
   hypotheses: 12,
-  lemmas: 3,
-  mass: 0.9,
-  listedBoost: 20,
-  forward: 1,
+  lemmas: 4,
+  mass: 0.97,
+  listedBoost: 1000,
+  cellSmoothing: 0,
+  forward: 0,
 }
 
 interface QuickFit {
@@ -80,7 +83,8 @@ export function guessForm(
       const cap = ctx.capitalShare.get(h.upos) ?? 0.5
       const prior =
         h.prior * (ctx.listed.has(key) ? opts.listedBoost : 1) * (isCapitalized(h.lemma) ? cap : 1 - cap)
-      return { ...h, form: k.key, how: k.how, inherent: ctx.listed.get(key) ?? '_', prior, weight: 0 }
+      const listed = ctx.listed.has(key)
+      return { ...h, form: k.key, how: k.how, inherent: ctx.listed.get(key) ?? '_', listed, prior, weight: 0 }
     }),
   )
   hyps.sort(
@@ -88,7 +92,8 @@ export function guessForm(
   )
   // The fast ranker knows whole paradigms only; a form it cannot make may still come from a table
   // composed cell by cell, so such a lemma is held back, not dropped.
-  const weighed = hyps.slice(0, opts.hypotheses)
+  // Lemmas the dictionary lists are always weighed, however rare the rewrite that leads to them.
+  const weighed = hyps.filter((h, i) => i < opts.hypotheses || (h.listed && i < opts.hypotheses * 4))
   for (const h of weighed) {
     const q = quickFit(model, ctx, h.lemma, h.upos, h.inherent)
     let inTable = 0
@@ -99,28 +104,19 @@ export function guessForm(
     (a, b) => b.weight - a.weight || cmp(a.lemma, b.lemma) || cmp(a.upos, b.upos) || cmp(a.form, b.form),
   )
   // The few best lemmas are inflected in full, so a guess agrees with what expanding that lemma gives;
-  // a form only improbable tables make falls back to the fast ranker's view of the cells.
-  const cells = weighed.slice(0, opts.lemmas).map((w) => {
-    const key = entryKey(w.lemma, w.upos)
-    const tables =
-      ctx.tables.get(key) ??
-      ctx.tables.set(key, predictTables(model.inflection, w.lemma, w.upos, w.inherent, 32))
-    let { marginal, inTable } = formCells(tables, w.form)
-    if (inTable <= 0) {
-      const paradigms = model.inflection.book.paradigms
-      const quick = quickFit(model, ctx, w.lemma, w.upos, w.inherent).cands.map((c) => {
-        const p = paradigms[c.paradigm]!
-        return {
-          paradigm: p.id,
-          score: c.prob,
-          cells: p.cells.map((x) => ({ key: x.key, forms: x.forms.map((f) => fillPattern(f, c.stems)) })),
-        }
-      })
-      ;({ marginal, inTable } = formCells(quick, w.form))
-    }
-    w.weight = inTable > 0 ? w.prior * inTable ** opts.forward : 0
-    return { w, marginal, inTable }
-  })
+  // a form only improbable tables make falls back to the fast ranker's view of the cells. Lemmas whose
+  // tables do not make the form at all give way to the next ones.
+  const cells: {
+    w: (typeof weighed)[number]
+    marginal: Map<string, { score: number; paradigm: string }>
+    inTable: number
+  }[] = []
+  for (let i = 0; i < weighed.length && cells.length < opts.lemmas && i < opts.lemmas * 3; i++) {
+    const w = weighed[i]!
+    const found = fullFit(model, ctx, w.lemma, w.upos, w.inherent, w.form)
+    w.weight = found.inTable > 0 ? w.prior * found.inTable ** opts.forward : 0
+    if (found.inTable > 0) cells.push({ w, ...found })
+  }
   const z = weighed.reduce((a, w) => a + w.weight, 0)
   cells.sort((a, b) => b.w.weight - a.w.weight || cmp(a.w.lemma, b.w.lemma) || cmp(a.w.upos, b.w.upos))
   const out: (GuessedAnalysis & { how: string })[] = []
@@ -132,7 +128,8 @@ export function guessForm(
     for (const [cell, m] of marginal) {
       if (has?.has(cell)) continue
       // Four significant digits: tidy answers that still rank improbable guesses apart.
-      const score = Number(((w.weight / z) * Math.min(1, m.score / inTable)).toPrecision(4))
+      const share = (Math.min(1, m.score / inTable) + opts.cellSmoothing) / (1 + opts.cellSmoothing)
+      const score = Number(((w.weight / z) * share).toPrecision(4))
       if (score < floor || score <= 0) continue
       out.push({
         lemma: w.lemma,
@@ -145,6 +142,29 @@ export function guessForm(
     }
   }
   return out
+}
+
+/** Where a form sits in a lemma's predicted tables (or, if none makes it, in its whole-paradigm candidates). */
+function fullFit(
+  model: LookupModel,
+  ctx: LookupContext,
+  lemma: string,
+  upos: string,
+  inherent: string,
+  form: string,
+) {
+  const key = entryKey(lemma, upos)
+  const tables =
+    ctx.tables.get(key) ?? ctx.tables.set(key, predictTables(model.inflection, lemma, upos, inherent, 32))
+  const found = formCells(tables, form)
+  if (found.inTable > 0) return found
+  const paradigms = model.inflection.book.paradigms
+  const quick = quickFit(model, ctx, lemma, upos, inherent).cands.map((c) => {
+    const p = paradigms[c.paradigm]!
+    const cells = p.cells.map((x) => ({ key: x.key, forms: x.forms.map((f) => fillPattern(f, c.stems)) }))
+    return { paradigm: p.id, score: c.prob, cells }
+  })
+  return formCells(quick, form)
 }
 
 /** Where a form sits in scored tables: per cell, the tables' summed score and the best one's paradigm. */

@@ -1,0 +1,119 @@
+// Lookup speed and size: analyze() over every form of a large model against a bare Map.get of the same
+// strings, the model file's bytes per form, and its load time. Reads the DDN13 German sets from
+// ../shared/bench-data/ddn13 (beside the repository, not part of it) and skips when they are missing.
+// Run: npm run bench:lookup -- [--json] [--rounds N] [--model FILE] [--save-model FILE]
+import { existsSync, readFileSync, writeFileSync } from 'node:fs'
+import { fileURLToPath } from 'node:url'
+import { parseArgs } from 'node:util'
+import { type Entry, rowsToEntries } from '../src/core/lexicon/entry.ts'
+import { analyzeForm } from '../src/core/lookup/analyze.ts'
+import { buildModel } from '../src/core/model/build-model.ts'
+import { decodeModel } from '../src/core/model/decode-model.ts'
+import { encodeModel } from '../src/core/model/encode-model.ts'
+
+const { values } = parseArgs({
+  options: {
+    json: { type: 'boolean', default: false },
+    rounds: { type: 'string', default: '5' },
+    model: { type: 'string' },
+    'save-model': { type: 'string' },
+  },
+})
+const log = (text: string) => process.stderr.write(`${text}\n`)
+const data = new URL('../../shared/bench-data/ddn13/', import.meta.url)
+const file = (name: string) => fileURLToPath(new URL(name, data))
+
+if (!values.model && (!existsSync(file('de-verb-train.tsv')) || !existsSync(file('de-noun-train.tsv')))) {
+  log('bench:lookup skipped: the DDN13 German sets (../shared/bench-data/ddn13) are not there')
+  process.exit(0)
+}
+
+function readTsv(name: string): Entry[] {
+  const rows = readFileSync(file(name), 'utf8')
+    .split('\n')
+    .filter((l) => l && !l.startsWith('#'))
+    .map((l) => {
+      const [lemma, form, upos, feats] = l.split('\t') as [string, string, string, string]
+      return { lemma, form, upos, feats }
+    })
+  return rowsToEntries(rows)
+}
+
+// The dictionary: German noun and verb tables, and the held-out lemmas listed without their tables
+// (or a model file given with --model).
+let learnSeconds = 0
+let text: string
+if (values.model) text = readFileSync(values.model, 'utf8')
+else {
+  const tables = [...readTsv('de-noun-train.tsv'), ...readTsv('de-verb-train.tsv')]
+  const bare = ['de-noun-dev.tsv', 'de-noun-test.tsv', 'de-verb-dev.tsv', 'de-verb-test.tsv']
+    .filter((n) => existsSync(file(n)))
+    .flatMap(readTsv)
+    .map((e): Entry => ({ lemma: e.lemma, upos: e.upos, feats: '_' }))
+  const t = performance.now()
+  const built = buildModel([...tables, ...bare])
+  learnSeconds = (performance.now() - t) / 1000
+  text = encodeModel(built)
+}
+if (values['save-model']) writeFileSync(values['save-model'], text)
+const bytes = new TextEncoder().encode(text).length
+
+// Load time: the whole decode (index rebuilt), beside a bare JSON.parse of the same text.
+let t0 = performance.now()
+JSON.parse(text)
+const parseSeconds = (performance.now() - t0) / 1000
+t0 = performance.now()
+const model = decodeModel(text)
+const loadSeconds = (performance.now() - t0) / 1000
+
+const forms = [...model.index.forms()]
+// The floor: a Map from the same strings to a value, looked up the same way.
+const floor = new Map(forms.map((f, i) => [f, i]))
+let sink = 0
+const timeMap = () => {
+  const t = performance.now()
+  for (const f of forms) sink += floor.get(f) ?? 0
+  return performance.now() - t
+}
+const timeAnalyze = () => {
+  const t = performance.now()
+  for (const f of forms) sink += analyzeForm(model, f).candidates.length
+  return performance.now() - t
+}
+// Alternate the two, several rounds, and compare medians: the machine is noisy.
+timeMap()
+timeAnalyze()
+const mapMs: number[] = []
+const analyzeMs: number[] = []
+for (let r = 0; r < Number(values.rounds); r++) {
+  mapMs.push(timeMap())
+  analyzeMs.push(timeAnalyze())
+}
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!
+const nsPerForm = (ms: number) => (ms * 1e6) / forms.length
+const mapNs = nsPerForm(median(mapMs))
+const analyzeNs = nsPerForm(median(analyzeMs))
+
+const result = {
+  lemmas: model.inflection.lexicon.entries.length,
+  forms: forms.length,
+  analyses: model.index.analysisCount,
+  modelBytes: bytes,
+  bytesPerForm: bytes / forms.length,
+  learnSeconds,
+  loadSeconds,
+  loadVsParse: loadSeconds / parseSeconds,
+  mapNsPerForm: mapNs,
+  analyzeNsPerForm: analyzeNs,
+  analyzeVsMap: analyzeNs / mapNs,
+}
+log(
+  `model: ${result.lemmas} lemmas, ${result.forms} forms, ${result.analyses} analyses, learned in ${learnSeconds.toFixed(1)} s`,
+)
+log(
+  `file: ${bytes} bytes = ${result.bytesPerForm.toFixed(1)} bytes per form; load ${(loadSeconds * 1000).toFixed(0)} ms = ${result.loadVsParse.toFixed(1)} × JSON.parse`,
+)
+log(
+  `analyze: ${analyzeNs.toFixed(0)} ns per form; Map.get: ${mapNs.toFixed(0)} ns; analyzeVsMap ${result.analyzeVsMap.toFixed(2)} (${sink > 0 ? 'checked' : ''})`,
+)
+if (values.json) process.stdout.write(`${JSON.stringify(result)}\n`)
