@@ -3,7 +3,7 @@ import { boundCandidates, type Candidate, mergeCandidates } from './candidate.ts
 import type { IndexedAnalysis } from './form-index.ts'
 import { DEFAULT_GUESS_OPTIONS, type GuessOptions, guessForm } from './guess.ts'
 import type { LookupModel } from './lookup-context.ts'
-import { type LookupKey, lookupTiers, type NormalizeOptions } from './normalize.ts'
+import { type LookupKey, lookupTiers, type NormalizeOptions, titleCase } from './normalize.ts'
 
 export interface AnalyzeOptions extends NormalizeOptions {
   /** At most this many predicted or guessed candidates (attested ones are never cut). */
@@ -37,10 +37,18 @@ const EXACT: readonly string[] = Object.freeze(['exact'])
 export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptions = {}): FormAnalysis {
   const top = opts.top ?? DEFAULT_TOP
   const minScore = opts.minScore ?? DEFAULT_MIN_SCORE
-  // Fast path: an indexed lower-case token needs no other spelling (its title case is only a fallback).
+  // Fast path: an indexed token is NFC already, and its first tier is itself with its lower and title case.
   const direct = model.index.get(form)
-  if (direct && form === form.toLowerCase())
-    return { form, normalized: EXACT, candidates: boundCandidates(direct, top, minScore) }
+  if (direct) {
+    const lower = form.toLowerCase()
+    const others = lower === form ? undefined : caseHits(model, form, lower)
+    if (!others) return { form, normalized: EXACT, candidates: bound(direct, top, minScore) }
+    return {
+      form,
+      normalized: others.how,
+      candidates: boundCandidates(mergeCandidates([direct, ...others.hits]), top, minScore),
+    }
+  }
 
   const tiers = lookupTiers(form, opts)
   for (const tier of tiers) {
@@ -72,6 +80,38 @@ export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptio
     ),
   ]
   return { form, normalized: how, candidates: boundCandidates(mergeCandidates(found), top, minScore) }
+}
+
+/** The indexed lower- and title-case forms of an indexed token (tier 1 of `lookupTiers`), if any. */
+function caseHits(
+  model: LookupModel,
+  form: string,
+  lower: string,
+): { how: string[]; hits: (readonly IndexedAnalysis[])[] } | undefined {
+  const how = ['exact']
+  const hits: (readonly IndexedAnalysis[])[] = []
+  const l = model.index.get(lower)
+  if (l) {
+    how.push('lowercase')
+    hits.push(l)
+  }
+  const title = titleCase(form)
+  const t = title !== form && title !== lower ? model.index.get(title) : undefined
+  if (t) {
+    how.push('titlecase')
+    hits.push(t)
+  }
+  return hits.length > 0 ? { how, hits } : undefined
+}
+
+/** The index's own answer when nothing needs cutting (the common case), else its bounded copy. */
+function bound(sorted: IndexedAnalysis[], top: number, minScore: number): Candidate[] {
+  let predicted = 0
+  for (const c of sorted) {
+    if (c.source === 'attested') continue
+    if (c.score < minScore || ++predicted > top) return boundCandidates(sorted, top, minScore)
+  }
+  return sorted
 }
 
 function lookupKey(model: LookupModel, k: LookupKey): (readonly IndexedAnalysis[])[] {

@@ -145,7 +145,7 @@ export class MemoryFormIndex implements FormIndex {
     return this.records.entry.length
   }
 
-  get(form: string): readonly IndexedAnalysis[] | undefined {
+  get(form: string): IndexedAnalysis[] | undefined {
     const s = this.slots.get(form)
     if (s === undefined) return undefined
     const r = this.records
