@@ -81,6 +81,7 @@ export async function runConstrain(run: ConstrainRun): Promise<void> {
     return
   }
 
+  const started = performance.now()
   const input = await openCorpusInput(run.corpus, { format: run.corpusFormat, skipBad: run.skipBad })
   const tally = await countTokens(input.tokens, new FormTally(), progress)
   const file = inputName(run.corpus)
@@ -112,6 +113,11 @@ export async function runConstrain(run: ConstrainRun): Promise<void> {
   const full = { ...summaryFacts(run, model, input.format, input.summary), ...finished }
   if (run.report) await writeLinesAtomic(run.report, [`${JSON.stringify(full, null, 2)}\n`])
   printSummary(finished, input.summary.skipped, input.summary.problems)
+  const secs = ((performance.now() - started) / 1000).toFixed(1)
+  const peak = Math.round(process.resourceUsage().maxRSS / 1024)
+  process.stderr.write(
+    `${tally.tokens} tokens, ${tally.types} form types in ${secs} s; peak memory ${peak} MB\n`,
+  )
 }
 
 async function writeConllu(
