@@ -25,7 +25,7 @@ export const DEFAULT_MIN_SCORE = 0.01
 export interface FormAnalysis {
   form: string
   normalized: readonly string[]
-  candidates: Candidate[]
+  candidates: readonly Candidate[]
 }
 
 const EXACT: readonly string[] = Object.freeze(['exact'])
@@ -88,24 +88,33 @@ function caseHits(
   form: string,
   lower: string,
 ): { how: string[]; hits: (readonly IndexedAnalysis[])[] } | undefined {
+  const l = model.index.get(lower)
+  // A token that is already in title case (the usual capitalized one) has no other title-case form.
+  const title = sameTail(form, lower) ? form : titleCase(form)
+  const t = title !== form && title !== lower ? model.index.get(title) : undefined
+  if (!l && !t) return undefined
   const how = ['exact']
   const hits: (readonly IndexedAnalysis[])[] = []
-  const l = model.index.get(lower)
   if (l) {
     how.push('lowercase')
     hits.push(l)
   }
-  const title = titleCase(form)
-  const t = title !== form && title !== lower ? model.index.get(title) : undefined
   if (t) {
     how.push('titlecase')
     hits.push(t)
   }
-  return hits.length > 0 ? { how, hits } : undefined
+  return { how, hits }
+}
+
+/** Do two strings agree after their first character (no allocation)? */
+function sameTail(a: string, b: string): boolean {
+  if (a.length !== b.length) return false
+  for (let i = 1; i < a.length; i++) if (a.charCodeAt(i) !== b.charCodeAt(i)) return false
+  return true
 }
 
 /** The index's own answer when nothing needs cutting (the common case), else its bounded copy. */
-function bound(sorted: IndexedAnalysis[], top: number, minScore: number): Candidate[] {
+function bound(sorted: readonly IndexedAnalysis[], top: number, minScore: number): readonly Candidate[] {
   let predicted = 0
   for (const c of sorted) {
     if (c.source === 'attested') continue

@@ -32,8 +32,8 @@ export interface FormIndex {
   readonly formCount: number
   /** (form, analysis) pairs indexed. */
   readonly analysisCount: number
-  /** The analyses of exactly this (NFC) string in answer order (see `compareCandidates`), or undefined; a fresh array. */
-  get(form: string): IndexedAnalysis[] | undefined
+  /** The analyses of exactly this (NFC) string in answer order (see `compareCandidates`), or undefined; shared, frozen. */
+  get(form: string): readonly IndexedAnalysis[] | undefined
   /** Indexed forms whose diacritic-folded spelling (see `foldDiacritics`) is `folded`. */
   folded(folded: string): readonly string[]
   /** Make `get` and `folded` answer for these keys. A whole index resolves at once. */

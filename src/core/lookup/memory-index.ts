@@ -127,6 +127,7 @@ interface PackedRecords {
 /** The in-memory implementation of `FormIndex`; build it with `FormIndexBuilder`. */
 export class MemoryFormIndex implements FormIndex {
   private foldMap: Map<string, string[]> | undefined
+  private readonly answers: (readonly IndexedAnalysis[] | undefined)[] = []
 
   constructor(
     private readonly slots: ReadonlyMap<string, number>,
@@ -145,9 +146,14 @@ export class MemoryFormIndex implements FormIndex {
     return this.records.entry.length
   }
 
-  get(form: string): IndexedAnalysis[] | undefined {
+  get(form: string): readonly IndexedAnalysis[] | undefined {
     const s = this.slots.get(form)
     if (s === undefined) return undefined
+    return this.answers[s] ?? this.materialize(s)
+  }
+
+  /** A form's answer, built on its first lookup and shared (frozen) from then on. */
+  private materialize(s: number): readonly IndexedAnalysis[] {
     const r = this.records
     const end = this.start[s + 1]!
     const out: IndexedAnalysis[] = []
@@ -163,6 +169,8 @@ export class MemoryFormIndex implements FormIndex {
         paradigm: p >= 0 ? this.paradigmIds[p]! : null,
       })
     }
+    for (const a of out) Object.freeze(a)
+    this.answers[s] = Object.freeze(out)
     return out
   }
 
