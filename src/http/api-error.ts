@@ -22,6 +22,7 @@ export type ApiErrorCode =
   | 'too-large'
   | 'unsupported-media-type'
   | 'invalid-content'
+  | 'bad-encoding'
   | 'store-failed'
   | 'internal'
 

@@ -9,6 +9,22 @@ export const MAX_CORPUS_BYTES = 2 * 1024 * 1024
 /** Largest model file accepted by a write, in bytes. Larger models: `formfold publish` to local storage. */
 export const MAX_MODEL_BYTES = 32 * 1024 * 1024
 
+/**
+ * Largest lexicon upload a write learns from, in bytes after gzip is undone (a bound on memory while reading;
+ * the CPU bound is `MAX_LEARN_LEMMAS`). Larger lexicons: `formfold learn`, then `formfold publish`.
+ */
+export const MAX_LEXICON_BYTES = 8 * 1024 * 1024
+
+/**
+ * Most lemmas (entries with a table plus lemma-only entries) one upload is learned from: learning costs about
+ * as much CPU per lemma-only entry (its tables are predicted) as per table. Measured in workerd with
+ * `npm run bench:edge-learn`; see the README.
+ */
+export const MAX_LEARN_LEMMAS = 2_500
+
+/** Most table rows (forms) one upload is learned from (a bound for dictionaries with large tables). */
+export const MAX_LEARN_ROWS = 75_000
+
 /** Forms in one `POST /v1/analyze` batch. */
 export const MAX_BATCH_FORMS = 1000
 
@@ -44,6 +60,9 @@ export const LIMITS = {
   maxBodyBytes: MAX_BODY_BYTES,
   maxCorpusBytes: MAX_CORPUS_BYTES,
   maxModelBytes: MAX_MODEL_BYTES,
+  maxLexiconBytes: MAX_LEXICON_BYTES,
+  maxLearnLemmas: MAX_LEARN_LEMMAS,
+  maxLearnRows: MAX_LEARN_ROWS,
   maxBatchForms: MAX_BATCH_FORMS,
   maxFormChars: MAX_FORM_CHARS,
   maxExpandLemmas: MAX_EXPAND_LEMMAS,

@@ -67,10 +67,10 @@ export class ModelRegistry<M> {
     return { name, version: loaded.version, model: decoded.set(loaded.sha256, loaded.model) as M }
   }
 
-  /** Publish a model file under a name (embedded names are read-only: 409). */
-  async publish(name: string, bytes: Uint8Array): Promise<VersionInfo> {
-    this.#writable(name)
-    const { model, ...info } = await this.store.publish(name, bytes)
+  /** Publish a model file under a name (embedded names are read-only: 409); `facts` join its summary. */
+  async publish(name: string, bytes: Uint8Array, facts?: ModelSummary): Promise<VersionInfo> {
+    this.assertWritable(name)
+    const { model, ...info } = await this.store.publish(name, bytes, facts)
     decoded.set(info.sha256, model)
     this.#pointers.set(name, {
       pointer: { version: info.version, sha256: info.sha256, movedAt: info.createdAt },
@@ -81,7 +81,7 @@ export class ModelRegistry<M> {
 
   /** Remove an unserved version. */
   async deleteVersion(name: string, version: number): Promise<void> {
-    this.#writable(name)
+    this.assertWritable(name)
     await this.store.deleteVersion(name, version)
   }
 
@@ -129,7 +129,8 @@ export class ModelRegistry<M> {
     return pointer
   }
 
-  #writable(name: string): void {
+  /** Refuse a name a write may not use: malformed (400) or embedded (409). Checked before costly work. */
+  assertWritable(name: string): void {
     checkName(name)
     if (this.#embedded.has(name))
       throw new ApiError(

@@ -1,50 +1,24 @@
-// The models routes: list models and versions, publish a model file (a write), delete an unserved version.
+// The models routes: list models and versions, publish a model file or a lexicon to learn (writes), delete a version.
 import { createRoute, type OpenAPIHono, z } from '@hono/zod-openapi'
 import { ApiError } from '../api-error.ts'
 import type { AppEnv } from '../env.ts'
+import { learnUpload } from '../learn-upload.ts'
+import { LEXICON_MEDIA_TYPES, lexiconMediaOf } from '../lexicon-media.ts'
 import { MAX_MODEL_BYTES } from '../limits.ts'
 import { errorResponses } from '../schemas/common.ts'
 import { MODEL_MEDIA_TYPE, MODEL_MEDIA_TYPES } from '../served-model.ts'
 import { mediaType, readBytes } from '../strict-input.ts'
 import { writeAuth } from '../write-auth.ts'
+import {
+  Described,
+  LearnedVersion,
+  Listing,
+  NameParam,
+  PublishQuery,
+  Version,
+  VersionParams,
+} from './models-schemas.ts'
 
-const Summary = z.record(z.string(), z.number()).openapi('ModelSummary')
-const Version = z
-  .object({
-    version: z.number().int(),
-    sha256: z.string(),
-    bytes: z.number().int(),
-    createdAt: z.string(),
-    summary: Summary,
-  })
-  .openapi('ModelVersion')
-const Listing = z
-  .object({
-    name: z.string(),
-    embedded: z.boolean(),
-    default: z.boolean(),
-    served: z.number().int().nullable(),
-    summary: Summary,
-  })
-  .openapi('ModelListing')
-const NameParam = z.object({
-  name: z.string().openapi({ param: { name: 'name', in: 'path' }, example: 'demo' }),
-})
-const VersionParams = NameParam.extend({
-  v: z.coerce
-    .number()
-    .int()
-    .positive()
-    .openapi({ param: { name: 'v', in: 'path' }, example: 2 }),
-})
-const Described = z
-  .object({
-    name: z.string(),
-    embedded: z.boolean(),
-    served: z.number().int().nullable(),
-    versions: z.array(Version),
-  })
-  .openapi('ModelVersions')
 const bearer = [{ bearer: [] as string[] }]
 
 const listRoute = createRoute({
@@ -70,24 +44,37 @@ const describeRoute = createRoute({
   },
 })
 
+const text = (description: string) => ({ schema: { type: 'string' as const, description } })
+
 const publishRoute = createRoute({
   method: 'put',
   path: '/v1/models/{name}',
-  summary: 'Publish a model file as a new version; the pointer moves once the version is stored and checked',
+  summary: 'Publish a new version: a model file as it is, or a lexicon that the service learns first',
+  description:
+    'A lexicon (table rows or a lemma list as TSV, entries as JSON lines; `Content-Encoding: gzip` accepted) is ' +
+    'read and learned exactly as `formfold learn` does; the pointer moves once the version is stored and checked. ' +
+    'Any bad line refuses the upload (422) unless `skipBad=1`; nothing is published on any error.',
   security: bearer,
   middleware: [writeAuth] as const,
   request: {
     params: NameParam,
-    // A plain schema, not zod: the file is read and checked by the store, not by a JSON validator.
+    query: PublishQuery,
+    // Plain schemas, not zod: bodies are streamed through the readers (or checked by the store), not parsed here.
     body: {
       required: true,
-      content: { [MODEL_MEDIA_TYPE]: { schema: { type: 'string', format: 'binary' } } },
+      content: {
+        [MODEL_MEDIA_TYPE]: { schema: { type: 'string', format: 'binary' } },
+        'text/tab-separated-values': text(
+          'table rows or a lemma list (`; format=rows|lemmas`, else sniffed)',
+        ),
+        'application/jsonl': text('entries, one JSON object a line (also application/x-ndjson)'),
+      },
     },
   },
   responses: {
     201: {
-      description: 'Published and served',
-      content: { 'application/json': { schema: Version.extend({ name: z.string() }) } },
+      description: 'Published and served (for a lexicon, with what learning it found and the time it took)',
+      content: { 'application/json': { schema: Version.extend({ name: z.string() }).or(LearnedVersion) } },
     },
     ...errorResponses(400, 401, 409, 413, 415, 422, 503),
   },
@@ -114,13 +101,21 @@ export function registerModelRoutes(app: OpenAPIHono<AppEnv>): void {
 
   app.openapi(publishRoute, async (c) => {
     const { name } = c.req.valid('param')
+    const query = c.req.valid('query')
+    const lexicon = lexiconMediaOf(c.req.header('content-type') ?? '', query.format)
+    if (lexicon) {
+      const skipBad = query.skipBad === '1' || query.skipBad === 'true'
+      return c.json(await learnUpload(c, name, lexicon.format, skipBad), 201)
+    }
     if (!MODEL_MEDIA_TYPES.includes(mediaType(c))) {
       throw new ApiError(
         415,
         'unsupported-media-type',
-        `send a model file as ${MODEL_MEDIA_TYPE} (made by \`formfold learn\`)`,
+        `send a model file as ${MODEL_MEDIA_TYPE} (made by \`formfold learn\`), or a lexicon to learn ` +
+          `as ${LEXICON_MEDIA_TYPES.join(', ')}`,
         {
           contentType: c.req.header('content-type') ?? null,
+          accepted: [...MODEL_MEDIA_TYPES, ...LEXICON_MEDIA_TYPES],
         },
       )
     }

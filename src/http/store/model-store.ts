@@ -120,10 +120,17 @@ export class ModelStore<M> {
     }
   }
 
-  /** Write a new version and move the pointer to it (see the class comment for the order of steps). */
-  async publish(name: string, bytes: Uint8Array): Promise<VersionInfo & { model: M }> {
+  /**
+   * Write a new version and move the pointer to it (see the class comment for the order of steps).
+   * `facts` are further counts stored in the version's summary (how a learned version was made).
+   */
+  async publish(
+    name: string,
+    bytes: Uint8Array,
+    facts: ModelSummary = {},
+  ): Promise<VersionInfo & { model: M }> {
     const model = this.validate(bytes)
-    const summary = this.#codec.summarize(model)
+    const summary = { ...this.#codec.summarize(model), ...facts }
     const sha256 = await sha256Hex(bytes)
     const existing = await this.versions(name)
     const version = (existing.at(-1)?.version ?? 0) + 1
