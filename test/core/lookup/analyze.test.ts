@@ -4,9 +4,14 @@ import { describe, expect, it } from 'vitest'
 import { expandLemma } from '../../../src/core/inflect/expand.ts'
 import { analyzeForm } from '../../../src/core/lookup/analyze.ts'
 import { compareCandidates } from '../../../src/core/lookup/candidate.ts'
+import { guessForm } from '../../../src/core/lookup/guess.ts'
+import { buildModel } from '../../../src/core/model/build-model.ts'
 import { decodeModel } from '../../../src/core/model/decode-model.ts'
 import { encodeModel } from '../../../src/core/model/encode-model.ts'
-import { germanModel } from './fixtures/german.ts'
+import { germanBareLemmas, germanModel, germanTables } from './fixtures/german.ts'
+
+const germanModelWithout = (lemma: string) =>
+  buildModel([...germanTables, ...germanBareLemmas.filter((e) => e.lemma !== lemma)])
 
 const model = germanModel()
 const entries = model.inflection.lexicon.entries
@@ -118,5 +123,52 @@ describe('order', () => {
       }),
       { numRuns: 150, seed: 11 },
     )
+  })
+})
+
+describe('normalization in analyze', () => {
+  it.each([
+    ['HUNDE', ['titlecase'], 'Hund'],
+    ['hunde', ['titlecase'], 'Hund'],
+    ['Machen', ['lowercase'], 'machen'],
+    ['Ma\u0308ntel', ['nfc'], 'Mantel'],
+  ])('%s is found as %j, lemma %s', (token, normalized, lemma) => {
+    const a = analyzeForm(model, token)
+    expect(a.normalized).toEqual(normalized)
+    expect(a.candidates[0]).toMatchObject({ lemma, source: 'attested' })
+  })
+
+  it('folds diacritics only when asked', () => {
+    expect(analyzeForm(model, 'Vatern').candidates.every((c) => c.source === 'guessed')).toBe(true)
+    const folded = analyzeForm(model, 'Vatern', { foldDiacritics: true })
+    expect(folded.normalized).toEqual(['folded'])
+    expect(folded.candidates).toEqual([
+      {
+        lemma: 'Vater',
+        upos: 'NOUN',
+        feats: 'Case=Dat|Number=Plur',
+        source: 'attested',
+        score: 1,
+        paradigm: expect.any(String),
+      },
+    ])
+  })
+})
+
+describe('bounds and preferences', () => {
+  it('cuts predicted and guessed candidates at top and minScore, never attested ones', () => {
+    const all = analyzeForm(model, 'Rosen', unbounded).candidates
+    const cut = analyzeForm(model, 'Rosen', { top: 2, minScore: 0.2 }).candidates
+    expect(cut).toEqual(all.filter((c) => c.score >= 0.2).slice(0, 2))
+    expect(analyzeForm(model, 'Tage', { top: 0, minScore: 1 }).candidates.length).toBe(3)
+  })
+
+  it('has the guesser prefer a lemma the dictionary lists without a table', () => {
+    const unlisted = germanModelWithout('Rose')
+    const guesses = (m: typeof model) => guessForm(m, [{ key: 'Rosen', how: 'exact' }])
+    const score = (m: typeof model) =>
+      guesses(m).find((c) => c.lemma === 'Rose' && c.feats === 'Case=Dat|Number=Plur')?.score ?? 0
+    expect(score(model)).toBeGreaterThan(score(unlisted))
+    expect(guesses(model)[0]).toMatchObject({ lemma: 'Rose', upos: 'NOUN' })
   })
 })
