@@ -44,7 +44,7 @@ export const DEFAULT_GUESS_OPTIONS: GuessOptions = {
   hypotheses: 12,
   lemmas: 4,
   mass: 0.97,
-  listedBoost: 1000,
+  listedBoost: 1_000_000,
   cellSmoothing: 0,
   forward: 0,
 }
