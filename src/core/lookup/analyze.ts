@@ -10,8 +10,11 @@ export interface AnalyzeOptions extends NormalizeOptions {
   top?: number
   /** Predicted and guessed candidates scoring below this are dropped. */
   minScore?: number
-  /** Guess when no spelling of the token is indexed (default true). */
-  guess?: boolean
+  /**
+   * When to guess: `true` (default) when no spelling of the token is indexed; `'unattested'` also when
+   * the index only predicts it (a bare lemma's kept tables may have missed the form's cell); `false` never.
+   */
+  guess?: boolean | 'unattested'
   guesser?: Partial<GuessOptions>
 }
 
@@ -31,27 +34,70 @@ export interface FormAnalysis {
 const EXACT: readonly string[] = Object.freeze(['exact'])
 
 /**
+ * The first tier of an indexed token, keyed by the index's (shared, immutable) answer for it: null when
+ * no other case of the token is indexed, else the merged answer. Computed once per form.
+ */
+const firstTiers = new WeakMap<
+  readonly IndexedAnalysis[],
+  { how: readonly string[]; candidates: readonly Candidate[] } | null
+>()
+
+/**
  * Analyze a token: its candidate (lemma, UPOS, FEATS) analyses, each attested, predicted or guessed, scored.
  * @example analyzeForm(model, 'Mänteln').candidates[0] // { lemma: 'Mantel', upos: 'NOUN', feats: 'Case=Dat|Number=Plur', source: 'predicted', ... }
  */
 export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptions = {}): FormAnalysis {
   const top = opts.top ?? DEFAULT_TOP
   const minScore = opts.minScore ?? DEFAULT_MIN_SCORE
+  const found = lookupIndex(model, form, opts)
+  if (found && (opts.guess !== 'unattested' || found.candidates.some((c) => c.source === 'attested'))) {
+    return { form, normalized: found.how, candidates: bound(found.candidates, top, minScore) }
+  }
+  if (opts.guess === false) return { form, normalized: [], candidates: [] }
+  const guesser = { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser }
+  const guesses = guessForm(model, lookupTiers(form, opts)[0] ?? [], minScore, guesser)
+  const how = [...new Set([...(found?.how ?? []), ...guesses.map((g) => g.how)])]
+  const guessed = guesses.map(
+    (g): Candidate => ({
+      lemma: g.lemma,
+      upos: g.upos,
+      feats: g.feats,
+      source: 'guessed',
+      score: g.score,
+      paradigm: g.paradigm,
+    }),
+  )
+  return {
+    form,
+    normalized: how,
+    candidates: boundCandidates(mergeCandidates([found?.candidates ?? [], guessed]), top, minScore),
+  }
+}
+
+/** The index's answer for a token: the first tier of its spellings that is indexed, merged and sorted. */
+function lookupIndex(
+  model: LookupModel,
+  form: string,
+  opts: NormalizeOptions,
+): { how: readonly string[]; candidates: readonly Candidate[] } | undefined {
   // Fast path: an indexed token is NFC already, and its first tier is itself with its lower and title case.
   const direct = model.index.get(form)
   if (direct) {
-    const lower = form.toLowerCase()
-    const others = lower === form ? undefined : caseHits(model, form, lower)
-    if (!others) return { form, normalized: EXACT, candidates: bound(direct, top, minScore) }
-    return {
-      form,
-      normalized: others.how,
-      candidates: boundCandidates(mergeCandidates([direct, ...others.hits]), top, minScore),
+    if (!hasCapitals(form)) return { how: EXACT, candidates: direct }
+    let first = firstTiers.get(direct)
+    if (first === undefined) {
+      const others = caseHits(model, form, form.toLowerCase())
+      first = others
+        ? {
+            how: Object.freeze(others.how),
+            candidates: Object.freeze(mergeCandidates([direct, ...others.hits])),
+          }
+        : null
+      firstTiers.set(direct, first)
     }
+    return first ?? { how: EXACT, candidates: direct }
   }
-
-  const tiers = lookupTiers(form, opts)
-  for (const tier of tiers) {
+  for (const tier of lookupTiers(form, opts)) {
     const found: (readonly IndexedAnalysis[])[] = []
     const how: string[] = []
     for (const k of tier) {
@@ -60,26 +106,9 @@ export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptio
       found.push(...hits)
       if (!how.includes(k.how)) how.push(k.how)
     }
-    if (found.length > 0)
-      return { form, normalized: how, candidates: boundCandidates(mergeCandidates(found), top, minScore) }
+    if (found.length > 0) return { how, candidates: mergeCandidates(found) }
   }
-  if (opts.guess === false) return { form, normalized: [], candidates: [] }
-  const guesser = { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser }
-  const guesses = guessForm(model, tiers[0] ?? [], minScore, guesser)
-  const how = [...new Set(guesses.map((g) => g.how))]
-  const found = [
-    guesses.map(
-      (g): Candidate => ({
-        lemma: g.lemma,
-        upos: g.upos,
-        feats: g.feats,
-        source: 'guessed',
-        score: g.score,
-        paradigm: g.paradigm,
-      }),
-    ),
-  ]
-  return { form, normalized: how, candidates: boundCandidates(mergeCandidates(found), top, minScore) }
+  return undefined
 }
 
 /** The indexed lower- and title-case forms of an indexed token (tier 1 of `lookupTiers`), if any. */
@@ -106,6 +135,16 @@ function caseHits(
   return { how, hits }
 }
 
+/** Does lower-casing change the string? A scan without allocation for ASCII, `toLowerCase` beyond it. */
+function hasCapitals(form: string): boolean {
+  for (let i = 0; i < form.length; i++) {
+    const c = form.charCodeAt(i)
+    if (c >= 65 && c <= 90) return true
+    if (c >= 128) return form !== form.toLowerCase()
+  }
+  return false
+}
+
 /** Do two strings agree after their first character (no allocation)? */
 function sameTail(a: string, b: string): boolean {
   if (a.length !== b.length) return false
@@ -114,7 +153,7 @@ function sameTail(a: string, b: string): boolean {
 }
 
 /** The index's own answer when nothing needs cutting (the common case), else its bounded copy. */
-function bound(sorted: readonly IndexedAnalysis[], top: number, minScore: number): readonly Candidate[] {
+function bound(sorted: readonly Candidate[], top: number, minScore: number): readonly Candidate[] {
   let predicted = 0
   for (const c of sorted) {
     if (c.source === 'attested') continue
