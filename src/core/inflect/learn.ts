@@ -2,6 +2,7 @@
 import type { Entry } from '../lexicon/entry.ts'
 import { buildLexicon, type Lexicon } from '../lexicon/lexicon.ts'
 import { CandidateFinder } from './candidates.ts'
+import type { CorpusEvidence } from './corpus-evidence.ts'
 import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
@@ -40,6 +41,8 @@ export interface InflectionModel {
   finder: CandidateFinder
   /** One rule ranker per (UPOS, cell). */
   cells: CellRuleModel[]
+  /** Form counts of the user's corpus, when one was given: evidence between candidate tables. */
+  corpus?: CorpusEvidence
   options: LearnOptions
 }
 

@@ -1,5 +1,6 @@
 // Prediction: the ranked candidate tables of a lemma, and its expanded table with a score per cell.
 import { cellFormDistribution } from './cell-rules.ts'
+import { rerankByCorpus } from './corpus-evidence.ts'
 import { lemmaFeatures } from './features.ts'
 import type { InflectionModel } from './learn.ts'
 import { fillPattern } from './pattern.ts'
@@ -11,6 +12,8 @@ export interface PredictedTable {
   score: number
   /** True for the table composed cell by cell (no single paradigm gives it; `paradigm` is the nearest). */
   composed?: boolean
+  /** Corpus evidence for this table (its distinctive forms the corpus attests), when a corpus was given. */
+  evidence?: number
   cells: { key: string; forms: string[] }[]
 }
 
@@ -60,6 +63,13 @@ function rankTables(
   for (const t of ranked) t.score = z > 0 ? t.score / z : 0
   const dists = cellDistributions(model, lemma, upos, inherent)
   if (dists.size > 0) ranked = combineWithCells(model, upos, ranked, dists)
+  if (model.corpus && ranked.length > 1) {
+    const { scores, evidence } = rerankByCorpus(
+      model.corpus,
+      ranked.map((t) => ({ score: t.score, cells: t.cells.map((c) => ({ key: c.key, form: c.forms[0] ?? '' })) })),
+    )
+    ranked = ranked.map((t, i) => ({ ...t, score: scores[i]!, evidence: evidence[i]! }))
+  }
   ranked.sort((a, b) => b.score - a.score || (a.paradigm < b.paradigm ? -1 : 1))
   return { tables: ranked.slice(0, limit), dists }
 }
@@ -85,13 +95,24 @@ export function predictLemma(model: InflectionModel, lemma: string, upos: string
   const cells: ScoredCell[] = keys.map((key) => {
     const m = new Map<string, number>()
     const fromTables = byKey.get(key)
-    const own = dists.get(key)
+    const own = corpusWeighted(model, dists.get(key))
     const wt = own ? 1 - mix : 1
     for (const f of fromTables?.forms ?? []) m.set(f.form, (m.get(f.form) ?? 0) + wt * f.score)
     if (own) for (const [f, p] of own) m.set(f, (m.get(f) ?? 0) + (fromTables ? mix : 1) * p)
     return { key, forms: [...m].sort((a, b) => b[1] - a[1] || (a[0] < b[0] ? -1 : 1)).map(([form, score]) => ({ form, score })) }
   })
   return { tables: tables.slice(0, limit), cells }
+}
+
+/** A cell's own distribution reweighted by corpus evidence for its distinctive forms (as tables are). */
+function corpusWeighted(model: InflectionModel, d: Map<string, number> | undefined): Map<string, number> | undefined {
+  if (!d || !model.corpus || d.size < 2) return d
+  const forms = [...d.keys()]
+  const { scores } = rerankByCorpus(
+    model.corpus,
+    forms.map((f) => ({ score: d.get(f)!, cells: [{ key: '', form: f }] })),
+  )
+  return new Map(forms.map((f, i) => [f, scores[i]!]))
 }
 
 function cellDistributions(model: InflectionModel, lemma: string, upos: string, inherent: string): Map<string, Map<string, number>> {
