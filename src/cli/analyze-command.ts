@@ -13,6 +13,7 @@ interface AnalyzeFlags {
   top: string
   minScore: string
   foldDiacritics?: boolean
+  guess: string
   skipBad?: boolean
 }
 
@@ -39,6 +40,11 @@ export function registerAnalyze(program: Command): void {
       String(DEFAULT_MIN_SCORE),
     )
     .option('--fold-diacritics', 'also look forms up without their diacritics')
+    .option(
+      '--guess <when>',
+      'guess analyses: missing (forms not indexed), unattested (also forms only predicted), never',
+      'missing',
+    )
     .option('--skip-bad', 'count unreadable lines instead of stopping at the first')
     .action((forms: string | undefined, flags: AnalyzeFlags) => runCommand(() => analyze(forms, flags)))
 }
@@ -76,5 +82,13 @@ function analyzeOptions(flags: AnalyzeFlags): AnalyzeOptions {
       message: `--min-score must be a number from 0 to 1, not "${flags.minScore}"`,
     })
   }
-  return { top, minScore, foldDiacritics: Boolean(flags.foldDiacritics) }
+  const when = { missing: true, unattested: 'unattested', never: false } as const
+  const guess = Object.hasOwn(when, flags.guess) ? when[flags.guess as keyof typeof when] : undefined
+  if (guess === undefined) {
+    throw new ProblemError({
+      code: 'bad-entry',
+      message: `--guess must be missing, unattested or never, not "${flags.guess}"`,
+    })
+  }
+  return { top, minScore, foldDiacritics: Boolean(flags.foldDiacritics), guess }
 }
