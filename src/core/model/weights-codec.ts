@@ -3,6 +3,7 @@
 import { decode, encode } from 'vlq'
 import type { InflectionModel } from '../inflect/learn.ts'
 import type { RankerWeights } from '../inflect/ranker.ts'
+import { LazyMap } from './lazy-map.ts'
 
 /**
  * The file form. `features` sorted; `local` is, per feature in that order, the number of its classes and
@@ -82,17 +83,19 @@ export function encodeWeights(w: RankerWeights, decimals: number): WeightsJson {
  * @example decodeWeights(encodeWeights(w, 3)).local.get('s2:el\u00003') // 0.152
  */
 export function decodeWeights(json: WeightsJson): RankerWeights {
-  const local = new Map<string, number>()
-  const ints = decode(json.local)
-  let at = 0
-  for (const f of json.features) {
-    const n = ints[at++]!
-    let c = 0
-    for (let k = 0; k < n; k++) {
-      c += ints[at++]!
-      local.set(`${f}\u0000${c}`, ints[at++]! / json.scale)
+  // The local weights are most of a model file: they are decoded when the ranker first needs them.
+  const local = new LazyMap<string, number>(function* () {
+    const ints = decode(json.local)
+    let at = 0
+    for (const f of json.features) {
+      const n = ints[at++]!
+      let c = 0
+      for (let k = 0; k < n; k++) {
+        c += ints[at++]!
+        yield [`${f}\u0000${c}`, ints[at++]! / json.scale] as const
+      }
     }
-  }
+  })
   const shared = new Map<string, number>()
   for (const f of Object.keys(json.shared)) shared.set(f, json.shared[f]! / json.scale)
   return { local, shared }
