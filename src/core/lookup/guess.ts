@@ -45,7 +45,7 @@ export const DEFAULT_GUESS_OPTIONS: GuessOptions = {
   lemmas: 4,
   mass: 0.97,
   listedBoost: 1_000_000,
-  cellSmoothing: 0,
+  cellSmoothing: 0.02,
   forward: 0,
 }
 
