@@ -1,8 +1,9 @@
 // `formfold learn SOURCES… -o MODEL`: tables, entries and lemma lists in; a model file out; summary on stderr.
 import type { Command } from 'commander'
 import { formatProblem } from '../core/index.ts'
-import { buildModel } from '../core/model/build-model.ts'
+import { buildModel, corpusChangedLemmas } from '../core/model/build-model.ts'
 import { encodeModel } from '../core/model/encode-model.ts'
+import { countCorpusForms } from './corpus-counts.ts'
 import { readSources, reportSkipped, runCommand, writeAtomic } from './io.ts'
 
 export function registerLearn(program: Command): void {
@@ -12,11 +13,13 @@ export function registerLearn(program: Command): void {
     .argument('<sources...>', 'table rows (.tsv), entries (.jsonl) or lemma lists (.tsv, 2-3 columns)')
     .requiredOption('-o, --output <model>', 'model file to write (written atomically)')
     .option('--skip-bad', 'count bad lines (first few shown) instead of stopping at the first')
-    .action((sources: string[], opts: { output: string; skipBad?: boolean }) =>
+    .option('--corpus <files...>', 'raw text or CoNLL-U whose forms help choose between candidate tables')
+    .action((sources: string[], opts: { output: string; skipBad?: boolean; corpus?: string[] }) =>
       runCommand(async () => {
         const t0 = performance.now()
         const read = await readSources(sources, { skipBad: Boolean(opts.skipBad) })
-        const model = buildModel(read.entries)
+        const corpus = opts.corpus ? await countCorpusForms(opts.corpus, { skipBad: Boolean(opts.skipBad) }) : undefined
+        const model = buildModel(read.entries, {}, corpus)
         const text = encodeModel(model)
         await writeAtomic(opts.output, text)
         const lex = model.inflection.lexicon
@@ -30,6 +33,12 @@ export function registerLearn(program: Command): void {
             `${predicted} lemma-only entries got predicted tables${unfit > 0 ? ` (${unfit} fit no learned paradigm)` : ''}; ` +
             `${forms} forms indexed; ${Buffer.byteLength(text)} bytes → ${opts.output} in ${seconds} s\n`,
         )
+        if (corpus) {
+          process.stderr.write(
+            `corpus: ${corpus.tokens} tokens, ${corpus.counts.size} distinct forms; ` +
+              `${corpusChangedLemmas(model)} lemma-only entries changed their best table because of it\n`,
+          )
+        }
         if (read.languageSpecific.length > 0) {
           process.stderr.write(`language-specific features: ${read.languageSpecific.join(' ')}\n`)
         }

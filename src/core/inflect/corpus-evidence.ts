@@ -24,7 +24,7 @@ export interface CorpusOptions {
 }
 
 /** Chosen on the DDN13 German dev simulation (see bench/corpus.ts). */
-export const DEFAULT_CORPUS_OPTIONS: CorpusOptions = { weight: 2, cap: 2, absence: 0.35 }
+export const DEFAULT_CORPUS_OPTIONS: CorpusOptions = { weight: 1.5, cap: 2, absence: 0.6 }
 
 /**
  * Build the evidence from form counts and the lexicon whose tables claim their forms.

@@ -1,6 +1,7 @@
 // Expansion: the full table of a lemma — attested from the dictionary, or predicted with a score per cell.
 import { mergeFeats } from '../lexicon/feats.ts'
 import { entryKey } from '../lexicon/entry.ts'
+import { corpusCount } from './corpus-evidence.ts'
 import type { InflectionModel } from './learn.ts'
 import { type PredictedTable, predictLemma } from './predict.ts'
 
@@ -13,6 +14,8 @@ export interface ExpandedForm {
   cell: string
   source: FormSource
   score: number
+  /** How often the learning corpus has this form (present only when the model has a corpus). */
+  corpus?: number
 }
 
 /**
@@ -92,7 +95,12 @@ export function expandLemma(
     score: best.score,
     forms: cells
       .filter((c) => have.has(c.key) && c.forms[0])
-      .map((c) => ({ form: c.forms[0]!.form, feats: mergeFeats(inh, c.key), cell: c.key, source: 'predicted' as const, score: c.forms[0]!.score })),
+      .map((c) => {
+        const form = c.forms[0]!.form
+        const f: ExpandedForm = { form, feats: mergeFeats(inh, c.key), cell: c.key, source: 'predicted', score: c.forms[0]!.score }
+        if (model.corpus) f.corpus = corpusCount(model.corpus, form)
+        return f
+      }),
     alternatives: opts.alternatives ? tables.slice(1, 1 + opts.alternatives) : [],
   }
 }

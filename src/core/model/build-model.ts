@@ -1,4 +1,6 @@
 // Building a model: learn from the tables, keep the best few tables of every bare lemma, index all forms.
+
+import { corpusEvidence } from '../inflect/corpus-evidence.ts'
 import { type InflectionModel, learnFromLexicon } from '../inflect/learn.ts'
 import { predictTables } from '../inflect/predict.ts'
 import type { Entry } from '../lexicon/entry.ts'
@@ -18,9 +20,44 @@ import { roundModelWeights } from './weights-codec.ts'
  * Learn a model from dictionary entries (tables and bare lemmas).
  * @example buildModel([{ lemma: 'Tag', upos: 'NOUN', feats: '_', forms: [...] }, { lemma: 'Mantel', upos: 'NOUN', feats: '_' }])
  */
-export function buildModel(entries: Iterable<Entry>, opts: Partial<ModelOptions> = {}): Model {
+export function buildModel(
+  entries: Iterable<Entry>,
+  opts: Partial<ModelOptions> = {},
+  corpus?: CorpusCounts,
+): Model {
   const options = { ...DEFAULT_MODEL_OPTIONS, ...opts }
-  return modelFromInflection(learnFromLexicon(buildLexicon(entries), options.learn), options)
+  const learned = learnFromLexicon(buildLexicon(entries), options.learn)
+  if (!corpus) return modelFromInflection(learned, options)
+  learned.corpus = corpusEvidence(corpus.counts, learned.lexicon)
+  const model = modelFromInflection(learned, options)
+  model.corpusTokens = corpus.tokens
+  return model
+}
+
+/** Form counts of a raw-text corpus (see `formfold learn --corpus`). */
+export interface CorpusCounts {
+  counts: Map<string, number>
+  tokens: number
+}
+
+/**
+ * How many bare lemmas have a different best table because of the corpus (the model against itself
+ * without its corpus).
+ * @example corpusChangedLemmas(model) // 37
+ */
+export function corpusChangedLemmas(model: Model): number {
+  const { corpus, ...rest } = model.inflection
+  if (!corpus) return 0
+  const plain = { ...rest }
+  let changed = 0
+  model.inflection.lexicon.entries.forEach((e, i) => {
+    const best = model.kept[i]?.[0]
+    if (!best) return
+    const before = predictTables(plain, e.lemma, e.upos, e.inherent, 1)[0]
+    const after = keptCells(model.inflection, e.lemma, best)
+    if (before && !sameCells(before.cells, after)) changed++
+  })
+  return changed
 }
 
 /**
@@ -66,12 +103,16 @@ export function assembleModel(
   options: ModelOptions,
 ): Model {
   const entries = inflection.lexicon.entries
-  const index = buildFormIndex(inflection, (i) =>
-    (kept[i] ?? []).map((t) => ({
-      paradigm: t.paradigm,
-      score: t.score,
-      cells: keptCells(inflection, entries[i]!.lemma, t),
-    })),
+  const index = buildFormIndex(
+    inflection,
+    (i) =>
+      (kept[i] ?? []).map((t) => ({
+        paradigm: t.paradigm,
+        score: t.score,
+        cells: keptCells(inflection, entries[i]!.lemma, t),
+        completes: t.completes === true,
+      })),
+    options.completion,
   )
   return { inflection, kept, index, options }
 }
@@ -79,12 +120,19 @@ export function assembleModel(
 /** The best tables of a bare lemma: at most `tablesPerLemma`, none below `tableFloor` except the best. */
 function keepTables(inflection: InflectionModel, e: LexEntry, opts: ModelOptions): KeptTable[] {
   const ids = paradigmIndex(inflection)
-  const tables = predictTables(inflection, e.lemma, e.upos, e.inherent, opts.tablesPerLemma)
+  const limit =
+    opts.completion > 0 ? Math.max(opts.tablesPerLemma, opts.completionTables) : opts.tablesPerLemma
+  const tables = predictTables(inflection, e.lemma, e.upos, e.inherent, limit)
   const out: KeptTable[] = []
+  let licensing = 0
   for (const t of tables) {
     const score = roundScore(t.score)
-    if (out.length > 0 && (score < opts.tableFloor || score <= 0)) break
+    const completes =
+      licensing >= opts.tablesPerLemma || (licensing > 0 && (score < opts.tableFloor || score <= 0))
+    if (completes && opts.completion <= 0) break
     const kept: KeptTable = { paradigm: ids.get(t.paradigm)!, score, cells: null }
+    if (completes) kept.completes = true
+    else licensing++
     if (!sameCells(keptCells(inflection, e.lemma, kept), t.cells))
       kept.cells = t.cells.map((c) => ({ key: c.key, forms: [...c.forms] }))
     out.push(kept)

@@ -5,6 +5,7 @@ import type { LexEntry } from '../lexicon/lexicon.ts'
 import { type Problem, ProblemError } from '../lexicon/problem.ts'
 import { assembleModel } from './build-model.ts'
 import { decodeCellRules } from './cell-rules-codec.ts'
+import { decodeCorpus } from './corpus-codec.ts'
 import { MODEL_FORMAT, MODEL_VERSION, type ModelJson } from './encode-model.ts'
 import type { KeptTable, Model } from './model.ts'
 import { decodeParadigm } from './paradigm-codec.ts'
@@ -71,8 +72,12 @@ export function decodeModel(text: string): Model {
     cells: (json.cellRules ?? []).map((c) => decodeCellRules(c, entries, cellsOf(c.upos))),
     options: json.options.learn,
   }
+  const corpus = decodeCorpus(json.corpus, inflection.lexicon)
+  if (corpus) inflection.corpus = corpus
   const { tablesPerLemma, tableFloor, weightDecimals, learn } = json.options
-  return assembleModel(inflection, kept, { tablesPerLemma, tableFloor, weightDecimals, learn })
+  const model = assembleModel(inflection, kept, { tablesPerLemma, tableFloor, weightDecimals, learn })
+  if (json.corpus) model.corpusTokens = json.corpus.tokens
+  return model
 }
 
 function checkHeader(json: ModelJson): void {

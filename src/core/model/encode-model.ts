@@ -1,6 +1,7 @@
 // Writing a model file: versioned JSON, deterministic (no clocks, fixed key order, rounded numbers), compact.
 import type { LearnOptions } from '../inflect/learn.ts'
 import { type CellRulesJson, encodeCellRules } from './cell-rules-codec.ts'
+import { type CorpusJson, encodeCorpus } from './corpus-codec.ts'
 import type { Model } from './model.ts'
 import { encodeParadigm, type ParadigmJson } from './paradigm-codec.ts'
 import { encodeAttested, encodeKept, type TableJson } from './table-codec.ts'
@@ -8,7 +9,7 @@ import { encodeWeights, type WeightsJson } from './weights-codec.ts'
 
 export const MODEL_FORMAT = 'formfold-model'
 /** Major changes break old readers; minor ones only add what old readers may ignore. */
-export const MODEL_VERSION = '1.0'
+export const MODEL_VERSION = '1.1'
 
 /** The whole file (FORMAT.md documents every field). */
 export interface ModelJson {
@@ -23,6 +24,8 @@ export interface ModelJson {
   weights: WeightsJson
   cellRules: CellRulesJson[]
   entries: [string, number, number, TableJson][]
+  /** Since 1.1: corpus counts that rerank candidate tables (absent when learned without a corpus). */
+  corpus?: CorpusJson
 }
 
 /**
@@ -64,5 +67,7 @@ export function encodeModel(model: Model): string {
     ),
     entries,
   }
+  const corpus = encodeCorpus(model.inflection, model.corpusTokens ?? 0)
+  if (corpus) json.corpus = corpus
   return JSON.stringify(json)
 }

@@ -4,11 +4,15 @@ import { applyParadigm } from '../inflect/paradigm.ts'
 import type { Cell } from '../lexicon/lexicon.ts'
 import type { FormIndex } from '../lookup/form-index.ts'
 
-/** A table kept for a bare lemma. `cells` is null when its paradigm, applied to the lemma, gives it. */
+/**
+ * A table kept for a bare lemma. `cells` is null when its paradigm, applied to the lemma, gives it.
+ * A table that `completes` licenses no form of its own: it only adds cells to forms the others license.
+ */
 export interface KeptTable {
   paradigm: number
   score: number
   cells: Cell[] | null
+  completes?: true
 }
 
 export interface ModelOptions {
@@ -19,6 +23,12 @@ export interface ModelOptions {
   tableFloor: number
   /** Weights are rounded to this many decimals, so the file and the model in memory are the same. */
   weightDecimals: number
+  /**
+   * A form a bare lemma's kept tables license also gets the other cells where its next-best tables (up to
+   * `completionTables` in all) put it, each with its share of those tables smoothed by this much (0: off).
+   */
+  completion: number
+  completionTables: number
 }
 
 /** Defaults chosen on the DDN13 German dev sets (see the lookup notes in FORMAT.md). */
@@ -27,6 +37,8 @@ export const DEFAULT_MODEL_OPTIONS: ModelOptions = {
   tablesPerLemma: 3,
   tableFloor: 0.1,
   weightDecimals: 4,
+  completion: 0.02,
+  completionTables: 16,
 }
 
 /**
@@ -39,6 +51,8 @@ export interface Model {
   kept: (KeptTable[] | null)[]
   index: FormIndex
   options: ModelOptions
+  /** Tokens of the corpus the model was learned with, when one was given. */
+  corpusTokens?: number
 }
 
 /**
