@@ -59,9 +59,10 @@ export async function readUpload(
 /** Some lines did not read: the first few, and what to do. */
 function badLines(read: LexiconReadResult): ApiError {
   const first = read.problems[0]!
+  const lines = read.skipped === 1 ? 'line' : 'lines'
   const message =
-    `${read.skipped} ${read.skipped === 1 ? 'line' : 'lines'} of the upload did not read as ${FORMAT_NAMES[read.format]} ` +
-    `(line ${first.line}: ${first.message}); nothing was published. Fix them, or add ?skipBad=1 to learn from the rest`
+    `${read.skipped} ${lines} of the upload did not read as ${FORMAT_NAMES[read.format]}; nothing was published. ` +
+    `Line ${first.line}: ${first.message}. Fix them, or add ?skipBad=1 to learn from the rest`
   return new ApiError(422, first.code, message, {
     format: read.format,
     lines: read.lines + read.skipped,
@@ -94,7 +95,7 @@ async function nothingRead(
   return new ApiError(
     422,
     'no-entries',
-    `no line of the upload read as ${how}; nothing was published (${problem.message})`,
+    `no line of the upload read as ${how}; nothing was published: ${problem.message}`,
     { format, problems: again.summary.problems.length > 0 ? again.summary.problems : [problem] },
   )
 }
