@@ -75,7 +75,11 @@ export function decodeModel(text: string): Model {
   const corpus = decodeCorpus(json.corpus, inflection.lexicon)
   if (corpus) inflection.corpus = corpus
   const { tablesPerLemma, tableFloor, weightDecimals, learn } = json.options
-  const model = assembleModel(inflection, kept, { tablesPerLemma, tableFloor, weightDecimals, learn })
+  // Version 1.0 files written before completion existed have no such fields: completion off.
+  const completion = json.options.completion ?? 0
+  const completionTables = json.options.completionTables ?? tablesPerLemma
+  const options = { tablesPerLemma, tableFloor, weightDecimals, learn, completion, completionTables }
+  const model = assembleModel(inflection, kept, options)
   if (json.corpus) model.corpusTokens = json.corpus.tokens
   return model
 }

@@ -15,7 +15,14 @@ export const MODEL_VERSION = '1.1'
 export interface ModelJson {
   format: typeof MODEL_FORMAT
   version: string
-  options: { tablesPerLemma: number; tableFloor: number; weightDecimals: number; learn: LearnOptions }
+  options: {
+    tablesPerLemma: number
+    tableFloor: number
+    weightDecimals: number
+    completion?: number
+    completionTables?: number
+    learn: LearnOptions
+  }
   upos: string[]
   cellKeys: Record<string, string[]>
   inflectional: Record<string, string[]>
@@ -51,11 +58,11 @@ export function encodeModel(model: Model): string {
       : encodeKept(model.kept[i] ?? [], cellsOf(e.upos))
     return [e.lemma, uposId.get(e.upos)!, f, table]
   })
-  const { tablesPerLemma, tableFloor, weightDecimals, learn } = model.options
+  const { tablesPerLemma, tableFloor, weightDecimals, completion, completionTables, learn } = model.options
   const json: ModelJson = {
     format: MODEL_FORMAT,
     version: MODEL_VERSION,
-    options: { tablesPerLemma, tableFloor, weightDecimals, learn },
+    options: { tablesPerLemma, tableFloor, weightDecimals, completion, completionTables, learn },
     upos,
     cellKeys: lexicon.cellKeys,
     inflectional: lexicon.inflectional,

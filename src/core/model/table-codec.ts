@@ -13,13 +13,14 @@ export type RawCells = [CellRef, ...string[]][]
 /**
  * The table slot of an entry record (see FORMAT.md): `p` (paradigm p applied to the lemma gives the table),
  * `{p, s}` (paradigm p with these stems), `{p, f}` (raw cells; p = its paradigm or -1), or for a bare lemma
- * the array of kept tables `[p, score×10⁴]` / `[p, score×10⁴, rawCells]`.
+ * the array of kept tables `[p, score×10⁴]` / `[p, score×10⁴, rawCells]`, with a trailing 1 for a table
+ * that only completes the cells of forms the others license.
  */
 export type TableJson =
   | number
   | { p: number; s: string[] }
   | { p: number; f: RawCells }
-  | ([number, number] | [number, number, RawCells])[]
+  | [number, number, ...(RawCells | 1)[]][]
 
 /** Encode the table of an attested entry, the most compact way that reproduces it exactly. */
 export function encodeAttested(
@@ -51,8 +52,10 @@ export function encodeAttested(
 /** Encode the kept tables of a bare lemma. */
 export function encodeKept(kept: readonly KeptTable[], cellKeys: readonly string[]): TableJson {
   return kept.map((t) => {
-    const score = Math.round(t.score * 1e4)
-    return t.cells ? [t.paradigm, score, encodeCells(t.cells, cellKeys)] : [t.paradigm, score]
+    const out: [number, number, ...(RawCells | 1)[]] = [t.paradigm, Math.round(t.score * 1e4)]
+    if (t.cells) out.push(encodeCells(t.cells, cellKeys))
+    if (t.completes) out.push(1)
+    return out
   })
 }
 
@@ -77,7 +80,14 @@ export function decodeTable(
     return {
       kept: t.map((k) => {
         if (!paradigms[k[0]]) throw bad(`${lemma}: no paradigm ${k[0]}`)
-        return { paradigm: k[0], score: k[1] / 1e4, cells: k[2] ? decodeCells(k[2], cellKeys) : null }
+        const raw = k.find((x): x is RawCells => Array.isArray(x))
+        const table: KeptTable = {
+          paradigm: k[0],
+          score: k[1] / 1e4,
+          cells: raw ? decodeCells(raw, cellKeys) : null,
+        }
+        if (k.slice(2).includes(1)) table.completes = true
+        return table
       }),
     }
   }
