@@ -10,7 +10,7 @@ import type { AppEnv } from './env.ts'
 import { readUpload } from './lexicon-read.ts'
 import { MAX_LEARN_LEMMAS, MAX_LEARN_ROWS, MAX_LEXICON_BYTES } from './limits.ts'
 import type { VersionInfo } from './store/model-store.ts'
-import { openUpload } from './upload-body.ts'
+import { openUpload, type UploadBody } from './upload-body.ts'
 
 /** The way around every upload limit: learn locally, then publish the model file. */
 export const CLI_PATH = '`formfold learn LEXICON -o MODEL`, then `formfold publish -m MODEL --name NAME`'
@@ -61,17 +61,35 @@ export async function learnUpload(
   const body = openUpload(c, MAX_LEXICON_BYTES, () =>
     tooLargeToLearn(`the lexicon is larger than ${MAX_LEXICON_BYTES} bytes`, { bytes: MAX_LEXICON_BYTES }),
   )
-  const read = await readUpload(body, format, skipBad)
-  checkLearnable(read.entries)
-  const t1 = performance.now()
-  const { text, report } = learn(read.entries)
+  const { text, learned, readAt: t1 } = await readAndLearn(body, format, skipBad)
   const t2 = performance.now()
-  const bytes = new TextEncoder().encode(text)
-  const info = await c.var.models.publish(name, bytes, {
-    skippedLines: read.skipped,
+  const info = await c.var.models.publish(name, new TextEncoder().encode(text), {
+    skippedLines: learned.skipped,
     learnMs: Math.round(t2 - t1),
   })
   const t3 = performance.now()
+  const ms = (a: number, b: number) => Math.round(b - a)
+  return {
+    name,
+    ...info,
+    learned,
+    milliseconds: { read: ms(t0, t1), learn: ms(t1, t2), publish: ms(t2, t3), total: ms(t0, t3) },
+  }
+}
+
+/**
+ * Read, check the size, learn and encode, in a scope of its own: the entries and the model are garbage once the
+ * file text exists, before publishing decodes the file again (memory is the edge's tightest resource).
+ */
+async function readAndLearn(
+  body: UploadBody,
+  format: LexiconFormat | undefined,
+  skipBad: boolean,
+): Promise<{ text: string; learned: LearnReport; readAt: number }> {
+  const read = await readUpload(body, format, skipBad)
+  checkLearnable(read.entries)
+  const readAt = performance.now()
+  const { text, report } = learn(read.entries)
   const learned: LearnReport = {
     format: read.format,
     gzip: body.gzip,
@@ -82,16 +100,10 @@ export async function learnUpload(
     languageSpecific: read.languageSpecific,
     ...report,
   }
-  const ms = (a: number, b: number) => Math.round(b - a)
-  return {
-    name,
-    ...info,
-    learned,
-    milliseconds: { read: ms(t0, t1), learn: ms(t1, t2), publish: ms(t2, t3), total: ms(t0, t3) },
-  }
+  return { text, learned, readAt }
 }
 
-/** Learn and encode; the model itself is dropped before publishing, which decodes the file again. */
+/** Learn and encode, as `formfold learn` does, with the counts its summary prints. */
 function learn(entries: Entry[]): {
   text: string
   report: Pick<LearnReport, 'tables' | 'lemmaOnly' | 'predicted' | 'notes'>
