@@ -38,7 +38,7 @@ export const DEFAULT_MODEL_OPTIONS: ModelOptions = {
   tableFloor: 0.1,
   weightDecimals: 4,
   completion: 0.02,
-  completionTables: 16,
+  completionTables: 4,
 }
 
 /**
