@@ -29,14 +29,15 @@ export function problemAt(code: ProblemCode, message: string, at: Where): Proble
  */
 export const MAX_WORD_CHARS = 256
 
+// C1 controls too: text decoded as Latin-1 and encoded again carries them (the HTTP API refuses them in forms).
 // biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is its purpose
-const CONTROL_OR_TAB = /[\u0000-\u001F\u007F]/
+const CONTROL_OR_TAB = /[\u0000-\u001F\u007F-\u009F]/
 const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/
 
 /**
  * Check a lemma or form: not blank, and (for values decoded from JSON escapes) no control characters,
- * tabs or lone surrogates, which no TSV line could carry; at most `MAX_WORD_CHARS` long. Returns the NFC
- * value or a problem.
+ * tabs or lone surrogates, which no TSV line could carry; no U+FEFF (the BOM of a second file joined to a
+ * first); at most `MAX_WORD_CHARS` long. Returns the NFC value or a problem.
  * @example checkWord('ha\u0308us', 'lemma', at) // { value: 'häus' }
  */
 export function checkWord(value: string, field: string, at: Where): { value: string } | { problem: Problem } {
@@ -45,6 +46,10 @@ export function checkWord(value: string, field: string, at: Where): { value: str
     return {
       problem: problemAt('control-char', `${field} "${value}" contains a tab or control character`, at),
     }
+  }
+  if (value.includes('\uFEFF')) {
+    const message = `${field} "${value}" contains U+FEFF, a byte order mark inside the file (were files joined?)`
+    return { problem: problemAt('control-char', message, at) }
   }
   if (LONE_SURROGATE.test(value)) {
     return { problem: problemAt('bad-utf8', `${field} contains a lone surrogate`, at) }

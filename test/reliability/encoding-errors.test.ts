@@ -62,6 +62,18 @@ const cases: BadCase[] = [
     says: 'control character U+000D at character 27',
   },
   {
+    name: 'a byte order mark inside the file (two files joined)',
+    file: 'bad.tsv',
+    data: `${GOOD}\uFEFFvessa\tvessan\tNOUN\tCase=Gen\n`,
+    says: 'lemma "\uFEFFvessa" contains U+FEFF, a byte order mark inside the file (were files joined?)',
+  },
+  {
+    name: 'a C1 control character (text decoded as Latin-1 twice)',
+    file: 'bad.tsv',
+    data: `${GOOD}vessa\tvessan\u0085\tNOUN\tCase=Gen\n`,
+    says: 'form "vessan\u0085" contains a tab or control character',
+  },
+  {
     name: 'a line over the length limit',
     file: 'bad.tsv',
     data: `${GOOD}vessa\t${'a'.repeat(MAX_LINE_CHARS)}\tNOUN\t_\n`,
