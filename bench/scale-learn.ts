@@ -1,0 +1,111 @@
+// Learning cost on the npm German verb and noun tables: time to learn vs. time to only read and parse the same
+// table rows, growth over sample fractions, and the model at the largest size (lemmas, forms, bytes, load time).
+// A seeded, evenly spread sample of the lemmas is used when all of them take too long (--lemmas N; 0 = all).
+// Every fifth sampled lemma becomes a lemma-only entry, so the model holds predicted tables too.
+// Run: npx tsx bench/scale-learn.ts -- [--lemmas 3000] [--fractions 0.1,0.3,1] [--json]
+import { Readable } from 'node:stream'
+import { fileURLToPath } from 'node:url'
+import { parseArgs } from 'node:util'
+import { type Entry, rowsToEntries } from '../src/core/lexicon/entry.ts'
+import { buildModel } from '../src/core/model/build-model.ts'
+import { decodeModel } from '../src/core/model/decode-model.ts'
+import { encodeModel } from '../src/core/model/encode-model.ts'
+import { readLexicon } from '../src/formats/index.ts'
+import { loadGermanNpm } from '../test/support/german-npm.ts'
+
+/** One learned size: lemmas in, seconds to parse its rows, seconds to learn, the model it gave. */
+export interface LearnPoint {
+  fraction: number
+  lemmas: number
+  tables: number
+  rows: number
+  parseSeconds: number
+  learnSeconds: number
+  forms: number
+  modelBytes: number
+  loadSeconds: number
+}
+
+/** Every k-th lemma of verbs then nouns, so a sample spreads over the alphabet and both parts of speech. */
+function sample(limit: number): Entry[] {
+  const all = [...rowsToEntries(loadGermanNpm('verbs').rows), ...rowsToEntries(loadGermanNpm('nouns').rows)]
+  if (limit <= 0 || limit >= all.length) return all
+  const step = all.length / limit
+  return Array.from({ length: limit }, (_, i) => all[Math.floor(i * step)]!)
+}
+
+/** The table rows of the table entries, as `formfold learn` reads them from a file. */
+function tsvOf(entries: Entry[]): string {
+  return entries
+    .flatMap((e) => (e.forms ?? []).map((f) => `${e.lemma}\t${f.form}\t${e.upos}\t${f.feats}\n`))
+    .join('')
+}
+
+/**
+ * Parse the rows of `entries`' first `fraction`, then learn a model from them (spread evenly; 1 in 5 as lemma-only).
+ * @example (await measureLearn(sample(300), 1)).learnSeconds
+ */
+export async function measureLearn(entries: Entry[], fraction: number): Promise<LearnPoint> {
+  const count = Math.round(entries.length * fraction)
+  const part = Array.from({ length: count }, (_, j) => entries[Math.floor(j / fraction)]!) // spread evenly
+  const input = part.map((e, i): Entry => (i % 5 === 4 ? { lemma: e.lemma, upos: e.upos, feats: '_' } : e))
+  const tables = input.filter((e) => e.forms)
+  const text = tsvOf(tables)
+  await readLexicon(Readable.from([Buffer.from(text)]), { file: 'warm.tsv', format: 'rows' }) // warm-up
+  let t = performance.now()
+  const read = await readLexicon(Readable.from([Buffer.from(text)]), { file: 'sample.tsv', format: 'rows' })
+  const parseSeconds = (performance.now() - t) / 1000
+  const lemmaOnly = input.filter((e) => !e.forms)
+  t = performance.now()
+  const model = buildModel([...read.entries, ...lemmaOnly])
+  const learnSeconds = (performance.now() - t) / 1000
+  const encoded = encodeModel(model)
+  t = performance.now()
+  const decoded = decodeModel(encoded)
+  const loadSeconds = (performance.now() - t) / 1000
+  return {
+    fraction,
+    lemmas: input.length,
+    tables: tables.length,
+    rows: read.entries.reduce((n, e) => n + (e.forms?.length ?? 0), 0),
+    parseSeconds,
+    learnSeconds,
+    forms: [...decoded.index.forms()].length,
+    modelBytes: Buffer.byteLength(encoded),
+    loadSeconds,
+  }
+}
+
+/** Growth and learn/parse over the given fractions of a sample of `lemmas` German lemmas. */
+export async function measureGrowth(lemmas: number, fractions: number[]) {
+  const entries = sample(lemmas)
+  const points: LearnPoint[] = []
+  for (const f of fractions) {
+    const p = await measureLearn(entries, f)
+    process.stderr.write(
+      `learn ${(f * 100).toFixed(0)}% (${p.lemmas} lemmas, ${p.tables} tables, ${p.rows} rows): parse ${p.parseSeconds.toFixed(3)} s, learn ${p.learnSeconds.toFixed(1)} s; ${p.forms} forms, ${p.modelBytes} bytes, load ${p.loadSeconds.toFixed(2)} s\n`,
+    )
+    points.push(p)
+  }
+  const full = points.at(-1)!
+  const first = points[0]!
+  return {
+    sampleLemmas: entries.length,
+    points,
+    learnVsParse: full.learnSeconds / full.parseSeconds,
+    learnGrowth: full.learnSeconds / first.learnSeconds,
+    workGrowth: full.lemmas / first.lemmas,
+  }
+}
+
+if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
+  const { values } = parseArgs({
+    options: {
+      lemmas: { type: 'string', default: '3000' },
+      fractions: { type: 'string', default: '0.1,0.3,1' },
+      json: { type: 'boolean', default: false },
+    },
+  })
+  const r = await measureGrowth(Number(values.lemmas), values.fractions!.split(',').map(Number))
+  if (values.json) process.stdout.write(`${JSON.stringify(r)}\n`)
+}
