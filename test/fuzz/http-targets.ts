@@ -1,18 +1,8 @@
-// Fuzz targets for the HTTP app, through app.request: random requests to every route, random and damaged models.
+// Fuzz target for the HTTP app: random requests to every route (and unknown ones) against the demo model.
 import fc from 'fast-check'
-import { rowsToEntries } from '../../src/core/lexicon/entry.ts'
-import { buildModel } from '../../src/core/model/build-model.ts'
-import { encodeModel } from '../../src/core/model/encode-model.ts'
-import { createApp } from '../../src/http/app.ts'
-import { feats, lexicon, noisyText, rawFeats, rowsToTsv, upos, word } from './arbitraries.ts'
-import { check, type FuzzTarget } from './target.ts'
-
-const TOKEN = 'fuzz-write-token'
-let app: ReturnType<typeof createApp> | undefined
-const send = (path: string, init?: RequestInit) => {
-  app ??= createApp()
-  return Promise.resolve(app.request(path, init, { WRITE_TOKEN: TOKEN }))
-}
+import { feats, noisyText, rawFeats, upos, word } from './arbitraries.ts'
+import { checkAnswer, TOKEN } from './http-answer.ts'
+import type { FuzzTarget } from './target.ts'
 
 /** A path segment or query value: encoded words, raw characters, broken percent escapes. */
 const segment = fc.oneof(
@@ -123,60 +113,6 @@ const request = fc.oneof(
     .map(([method, s]) => ({ method, path: `/v1/${s}/${s}` })),
 )
 
-/** Send a request and check the answer: under 500; an error is JSON in the one shape; the body reads to its end. */
-async function checkAnswer(path: string, init: RequestInit): Promise<Response> {
-  const res = await send(path, init)
-  const body = await res.text()
-  check(
-    res.status < 500,
-    () => `${init.method ?? 'GET'} ${path} answered ${res.status}: ${body.slice(0, 300)}`,
-  )
-  check(!/\bat \S+ \(|\.ts:\d+|node_modules/.test(body), () => `${path}: a stack trace in the body`)
-  if (res.status >= 400 && init.method !== 'HEAD') {
-    const parsed = JSON.parse(body) as { error?: Record<string, unknown> }
-    check(
-      parsed.error && Object.keys(parsed.error).sort().join() === 'code,details,message',
-      () => `${path}: error shape ${body.slice(0, 200)}`,
-    )
-  }
-  return res
-}
-
-/** Every place in a JSON value (objects and arrays, depth first) as a setter. */
-function places(value: unknown, out: ((v: unknown) => void)[] = []): ((v: unknown) => void)[] {
-  if (value && typeof value === 'object') {
-    for (const key of Object.keys(value)) {
-      const holder = value as Record<string, unknown>
-      out.push((v) => {
-        holder[key] = v
-      })
-      places(holder[key], out)
-    }
-  }
-  return out
-}
-
-/** A model file made from a random lexicon, maybe damaged: one value anywhere in it replaced by random JSON. */
-const uploaded = fc
-  .tuple(lexicon, fc.option(fc.tuple(fc.nat(), fc.jsonValue()), { freq: 2 }))
-  .map(([lex, damage]) => {
-    const json = JSON.parse(
-      encodeModel(buildModel([...rowsToEntries(lex.tables.flat()), ...lex.bare])),
-    ) as unknown
-    if (damage) {
-      const all = places(json)
-      all[damage[0] % all.length]!(damage[1])
-    }
-    return {
-      text: JSON.stringify(json),
-      lemma: lex.tables[0]![0]!.lemma,
-      form: lex.tables[0]![0]!.form,
-      tsv: rowsToTsv(lex.tables[0]!),
-    }
-  })
-
-let published = 0
-
 export const httpTargets: FuzzTarget[] = [
   {
     name: 'http: random requests',
@@ -195,41 +131,6 @@ export const httpTargets: FuzzTarget[] = [
           headers,
           body: withBody ? (body as BodyInit) : undefined,
         })
-      }),
-  },
-  {
-    name: 'http: random and damaged models',
-    checks:
-      'PUT of models learned from random tables, some with a field replaced; a published one answers analyze, lemma, expand and constraint requests under 500',
-    cost: 8,
-    property: () =>
-      fc.asyncProperty(uploaded, async (u) => {
-        const name = `fuzz-${published++ % 4}`
-        const put = {
-          method: 'PUT',
-          headers: {
-            'content-type': 'application/vnd.formfold.model+json',
-            authorization: `Bearer ${TOKEN}`,
-          },
-          body: u.text,
-        }
-        const res = await checkAnswer(`/v1/models/${name}`, put)
-        if (res.status !== 201) return
-        const tsv = { 'content-type': 'text/tab-separated-values' }
-        await checkAnswer(`/v1/analyze?model=${name}&form=${encodeURIComponent(u.form)}`, { method: 'GET' })
-        await checkAnswer(`/v1/lemmas/${encodeURIComponent(u.lemma)}?model=${name}`, { method: 'GET' })
-        await checkAnswer(`/v1/expand?model=${name}`, {
-          method: 'POST',
-          headers: tsv,
-          body: u.tsv.split('\n')[0]!.split('\t').slice(0, 1).concat('NOUN').join('\t'),
-        })
-        await checkAnswer(`/v1/constraints?model=${name}`, {
-          method: 'POST',
-          headers: { 'content-type': 'text/plain' },
-          body: `${u.form} ${u.lemma}.`,
-        })
-        await checkAnswer(`/v1/constraints.tsv?model=${name}`, { method: 'GET' })
-        await checkAnswer(`/v1/paradigms?model=${name}`, { method: 'GET' })
       }),
   },
 ]

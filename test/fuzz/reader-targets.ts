@@ -41,12 +41,10 @@ const messyTsv = noisyText(
 
 /** The same text as a string, or as UTF-8 bytes in random chunks. */
 const delivered = (text: fc.Arbitrary<string>) =>
-  fc
-    .tuple(text, fc.boolean(), chunking)
-    .map(([t, asString, cuts]) => ({
-      text: t,
-      input: () => (asString ? t : chunks(encoder.encode(t), cuts)),
-    }))
+  fc.tuple(text, fc.boolean(), chunking).map(([t, asString, cuts]) => ({
+    text: t,
+    input: () => (asString ? t : chunks(encoder.encode(t), cuts)),
+  }))
 
 /** An entries line: an object with some of the keys, each of a random JSON type, or any JSON. */
 const entryLine = fc.oneof(

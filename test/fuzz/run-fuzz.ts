@@ -3,11 +3,18 @@ import fc from 'fast-check'
 import { cliTarget } from './cli-target.ts'
 import { coreTargets } from './core-targets.ts'
 import { httpTargets } from './http-targets.ts'
+import { modelTargets } from './model-targets.ts'
 import { readerTargets } from './reader-targets.ts'
 import type { FuzzTarget } from './target.ts'
 
 /** Every target, readers first (cheapest). */
-export const FUZZ_TARGETS: FuzzTarget[] = [...readerTargets, ...coreTargets, ...httpTargets, cliTarget]
+export const FUZZ_TARGETS: FuzzTarget[] = [
+  ...readerTargets,
+  ...coreTargets,
+  ...httpTargets,
+  ...modelTargets,
+  cliTarget,
+]
 
 export interface FuzzOptions {
   /** Inputs per target before its cost divides them. */
