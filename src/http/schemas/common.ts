@@ -71,6 +71,12 @@ export const TableForm = z
     cell: z.string(),
     source: z.enum(['attested', 'predicted']),
     score: z.number(),
+    corpus: z
+      .number()
+      .int()
+      .min(0)
+      .optional()
+      .openapi({ description: 'how often the corpus the model learned with has this form (models learned with --corpus)' }),
   })
   .openapi('TableForm')
 
