@@ -57,8 +57,8 @@ const requests: [string, RequestInit?][] = [
 ]
 
 describe('inputs fuzzing found', () => {
-  // A model file is checked when it is published (DESIGN.md, scale): one it accepts must then answer every
-  // route under 500, with a body that reads to its end.
+  // src/http/README.md, errors: "a corrupt model file" is a 422 `bad-model`. One the service accepts must then
+  // answer every route under 500, with a body that reads to its end.
   it.each([
     ['a number for a UPOS', 'upos', [0]],
     ['a string for the options', 'options', ' '],

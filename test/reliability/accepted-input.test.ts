@@ -8,7 +8,7 @@ const CLEAN = asFile(tables)
 const encoder = new TextEncoder()
 const BOM = new Uint8Array([0xef, 0xbb, 0xbf])
 
-// Each variant says the same rows; the readers accept a BOM and CRLF and normalize to NFC (DESIGN.md, formats).
+// Each variant says the same rows; the readers accept a BOM and CRLF and normalize to NFC (README, input formats).
 const variants: [string, string | Uint8Array][] = [
   ['a byte order mark', new Uint8Array([...BOM, ...encoder.encode(CLEAN)])],
   ['CRLF line ends', CLEAN.replaceAll('\n', '\r\n')],

@@ -12,7 +12,7 @@ interface ExitCase {
 
 const NOT_A_MODEL = '{"hello":"world"}\n'
 
-// DESIGN.md, command line: "Exit codes: 0 done, 1 failed, 2 bad usage or bad input".
+// README, command line: "Exit codes: 0 done, 1 failed, 2 bad usage or bad input (the message names `file:line`)".
 const cases: ExitCase[] = [
   { name: 'an unknown command', args: ['fold'], says: "unknown command 'fold'" },
   {
