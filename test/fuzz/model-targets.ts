@@ -1,9 +1,9 @@
 // Fuzz targets for model writes: random and damaged model files, and lexicon uploads the service learns.
 import fc from 'fast-check'
 import { rowsToEntries } from '../../src/core/lexicon/entry.ts'
+import { ProblemError } from '../../src/core/lexicon/problem.ts'
 import { buildModel } from '../../src/core/model/build-model.ts'
 import { encodeModel } from '../../src/core/model/encode-model.ts'
-import { ProblemError } from '../../src/core/lexicon/problem.ts'
 import { type LexiconFormat, readLexicon } from '../../src/formats/index.ts'
 import { lexicon, noisyText, rowsToTsv, table, word } from './arbitraries.ts'
 import { checkAnswer, TOKEN } from './http-answer.ts'
