@@ -2,7 +2,8 @@
 import { readFile } from 'node:fs/promises'
 import { basename } from 'node:path'
 import { type ServerType, serve } from '@hono/node-server'
-import { decodeModel } from './core/model/decode-model.ts'
+import { ProblemError } from './core/lexicon/problem.ts'
+import { readModel } from './core/model/decode-model.ts'
 import { createApp } from './http/app.ts'
 import { registryOver } from './http/app-registry.ts'
 import { demoModel } from './http/demo-model.ts'
@@ -49,7 +50,15 @@ export async function startNodeServer(options: NodeServerOptions): Promise<NodeS
   const embedded: EmbeddedModel<ServedModel>[] = [demoModel]
   let defaultName = demoModel.name
   if (options.modelFile) {
-    const model = decodeModel(await readFile(options.modelFile, 'utf8'))
+    let text: string
+    try {
+      text = await readFile(options.modelFile, 'utf8')
+    } catch {
+      throw new ProblemError({ code: 'unreadable-file', file: options.modelFile, message: 'cannot read the model file' })
+    }
+    const read = readModel(text)
+    if (!read.ok) throw new ProblemError({ ...read.problem, file: options.modelFile })
+    const model = read.model
     defaultName = options.modelName ?? modelNameOf(options.modelFile)
     embedded.unshift({ name: defaultName, load: () => model, summarize: summarizeModel })
   }

@@ -4,7 +4,8 @@ import { readFile } from 'node:fs/promises'
 import { basename } from 'node:path'
 import type { Analyzer } from '../core/constrain/index.ts'
 import { type AnalyzeOptions, analyzeForm } from '../core/lookup/analyze.ts'
-import { decodeModel } from '../core/model/decode-model.ts'
+import { readModel } from '../core/model/decode-model.ts'
+import { ProblemError } from '../core/lexicon/problem.ts'
 import { MODEL_VERSION } from '../core/model/encode-model.ts'
 import { EXIT } from './io.ts'
 
@@ -30,7 +31,9 @@ export async function loadConstrainModel(path: string, lookup: AnalyzeOptions = 
     process.stderr.write(`formfold constrain: ${path}: cannot read the model file\n`)
     process.exit(EXIT.badInput)
   }
-  const model = decodeModel(text)
+  const read = readModel(text)
+  if (!read.ok) throw new ProblemError({ ...read.problem, file: path })
+  const model = read.model
   // The file's own format version (decoding checked it); the header names it.
   const version = /"version"\s*:\s*"([^"]*)"/.exec(text.slice(0, 500))?.[1] ?? MODEL_VERSION
   return {

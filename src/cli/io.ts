@@ -67,7 +67,10 @@ export async function writeAtomic(path: string, data: string | Uint8Array): Prom
 export async function runCommand(body: () => Promise<void>): Promise<void> {
   try {
     await body()
-  } catch (err) {
+  } catch (caught) {
+    // A path the user named that cannot be opened is bad usage (exit 2), whichever command met it.
+    const path = (caught as NodeJS.ErrnoException | undefined)?.path
+    const err = path ? unreadable(caught, path) : caught
     if (err instanceof ProblemError) {
       process.stderr.write(`formfold: ${formatProblem(err.problem)}\n`)
       process.exit(EXIT.badInput)

@@ -78,7 +78,13 @@ async function publish(o: PublishOptions): Promise<void> {
     )
     process.exit(EXIT.badInput)
   }
-  const bytes = new Uint8Array(await readFile(o.model))
+  let bytes: Uint8Array
+  try {
+    bytes = new Uint8Array(await readFile(o.model))
+  } catch {
+    process.stderr.write(`formfold publish: ${o.model}: cannot read the model file\n`)
+    process.exit(EXIT.badInput)
+  }
   if (o.url) {
     const result = await publishToService(o.url, o.name, bytes, o.token ?? process.env.FORMFOLD_WRITE_TOKEN)
     if (!result.ok) {
