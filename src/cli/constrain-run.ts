@@ -83,8 +83,12 @@ export async function runConstrain(run: ConstrainRun): Promise<void> {
 
   const started = performance.now()
   const input = await openCorpusInput(run.corpus, { format: run.corpusFormat, skipBad: run.skipBad })
-  const tally = await countTokens(input.tokens, new FormTally(), progress)
   const file = inputName(run.corpus)
+  // Checked before anything is written: a failed run leaves every existing output as it was.
+  if (run.conllu && input.format !== 'conllu') {
+    throw new ProblemError({ code: 'bad-conllu', file, message: '--conllu needs a CoNLL-U corpus; this one reads as plain text' })
+  }
+  const tally = await countTokens(input.tokens, new FormTally(), progress)
   const report = new ReportBuilder(run.options)
   const allowed: TypeConstraint[] = []
   const rows = (function* () {
@@ -101,13 +105,6 @@ export async function runConstrain(run: ConstrainRun): Promise<void> {
   endProgress()
   const finished = report.finish()
   if (run.conllu) {
-    if (input.format !== 'conllu') {
-      throw new ProblemError({
-        code: 'bad-conllu',
-        file,
-        message: '--conllu needs a CoNLL-U corpus; this one reads as plain text',
-      })
-    }
     await writeConllu(run, allowedLookup(allowed, model.analyzer, run.options))
   }
   const full = { ...summaryFacts(run, model, input.format, input.summary), ...finished }
