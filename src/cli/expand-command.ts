@@ -2,7 +2,8 @@
 import type { Command } from 'commander'
 import { type Entry, type ExpandedTable, expandLemma, ProblemError } from '../core/index.ts'
 import type { Model } from '../core/model/model.ts'
-import { formatJsonLine, formatTableRow } from '../formats/index.ts'
+import { createReadStream } from 'node:fs'
+import { formatJsonLine, formatTableRow, parseLemmaLine, streamRecords } from '../formats/index.ts'
 import { readSources, reportSkipped, runCommand } from './io.ts'
 import { loadModelFile } from './model-file.ts'
 
@@ -26,14 +27,25 @@ export function registerExpand(program: Command): void {
           throw new ProblemError({ code: 'bad-entry', message: '--alternatives must be an integer from 0 to 20' })
         }
         const model = await loadModelFile(opts.model)
-        let wanted = bareLemmas(model)
-        if (lemmas) {
+        let wanted: Iterable<Entry> | AsyncIterable<Entry> = bareLemmas(model)
+        if (lemmas === '-') {
           const read = await readSources([lemmas], { skipBad: Boolean(opts.skipBad), format: 'lemmas' })
           reportSkipped(read)
           wanted = read.entries
+        } else if (lemmas) {
+          // A file is read twice, in bounded memory: checked whole first (a bad line stops the run before any
+          // table is written), then streamed.
+          const skipBad = Boolean(opts.skipBad)
+          const check = streamRecords(createReadStream(lemmas), parseLemmaLine, { file: lemmas, skipBad })
+          let count = 0
+          for await (const _ of check) count++
+          if (count === 0) throw new ProblemError({ code: 'no-entries', file: lemmas, message: 'no lemmas to expand' })
+          const s = check.summary
+          reportSkipped({ entries: [], skipped: s.skipped, problems: s.problems, languageSpecific: [] })
+          wanted = streamRecords(createReadStream(lemmas), parseLemmaLine, { file: lemmas, skipBad: true })
         }
         const out = process.stdout
-        for (const e of wanted) {
+        for await (const e of wanted) {
           const table = expandLemma(model.inflection, e.lemma, e.upos, e.feats, { alternatives })
           if (!table) {
             process.stderr.write(`no learned paradigm of ${e.upos} applies to "${e.lemma}"\n`)
