@@ -5,6 +5,7 @@ import type { LexEntry } from '../lexicon/lexicon.ts'
 import { type Problem, ProblemError } from '../lexicon/problem.ts'
 import { assembleModel } from './build-model.ts'
 import { decodeCellRules } from './cell-rules-codec.ts'
+import { checkModelJson, smokeTestModel } from './check-model.ts'
 import { decodeCorpus } from './corpus-codec.ts'
 import { MODEL_FORMAT, MODEL_VERSION, type ModelJson } from './encode-model.ts'
 import type { KeptTable, Model } from './model.ts'
@@ -38,6 +39,7 @@ export function decodeModel(text: string): Model {
     throw bad('not JSON')
   }
   checkHeader(json)
+  checkModelJson(json as unknown as Record<string, unknown>)
   const cellsOf = (u: string) => json.cellKeys[u] ?? []
   const paradigms = json.paradigms.map((p) => decodeParadigm(p, cellsOf(p.upos)))
   const entries: LexEntry[] = []
@@ -81,6 +83,7 @@ export function decodeModel(text: string): Model {
   const options = { tablesPerLemma, tableFloor, weightDecimals, learn, completion, completionTables }
   const model = assembleModel(inflection, kept, options)
   if (json.corpus) model.corpusTokens = json.corpus.tokens
+  smokeTestModel(model)
   return model
 }
 
