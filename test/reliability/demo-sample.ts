@@ -2,6 +2,7 @@
 import { readFileSync } from 'node:fs'
 import { join } from 'node:path'
 import { DEMO } from './cli.ts'
+import { mulberry32 } from '../../src/core/inflect/ranker.ts'
 
 /** Lemmas with variant forms in one cell (two rows for the same lemma, UPOS and FEATS) in demo-lexicon/tables.tsv. */
 export const VARIANT_LEMMAS = ['kelmä', 'talva', 'vorulla']
@@ -39,18 +40,6 @@ export function demoSample(perUpos: number, bare: number): { tables: string[]; l
   return { tables, lemmas: demoLines('lemmas.tsv').slice(0, bare) }
 }
 
-/** A seeded generator of numbers in [0, 1) (mulberry32), so a shuffle is the same on every run. */
-function random(seed: number): () => number {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
-
 /**
  * Shuffle table rows (Fisher–Yates, seeded), then put the variants of each cell back in their first order:
  * rows of one (lemma, UPOS, FEATS) are not of equal priority (the first listed form is the preferred one),
@@ -58,7 +47,7 @@ function random(seed: number): () => number {
  * @example shuffleRows(['a\ta\tNOUN\t_', 'b\tb\tNOUN\t_'], 1) // the same two rows, in some order
  */
 export function shuffleRows(rows: readonly string[], seed: number): string[] {
-  const next = random(seed)
+  const next = mulberry32(seed)
   const order = rows.map((_, i) => i)
   for (let i = order.length - 1; i > 0; i--) {
     const j = Math.floor(next() * (i + 1))
