@@ -41,13 +41,40 @@ export function checkModelJson(json: Record<string, unknown>): void {
     if (!v || typeof v !== 'object') throw bad(`options.learn.${g} must be an object`)
     for (const k of keys) if (!isNum(v[k])) throw bad(`options.learn.${g}.${k} must be a number`)
   }
+  checkWeights(json.weights, 'weights')
+  if (json.cellRules !== undefined) {
+    if (!Array.isArray(json.cellRules)) throw bad('"cellRules" must be a list')
+    json.cellRules.forEach((c: { weights?: unknown; rules?: unknown; members?: unknown }, i: number) => {
+      if (!c || typeof c !== 'object' || !Array.isArray(c.rules) || typeof c.members !== 'string') throw bad(`cellRules[${i}] is malformed`)
+      checkWeights(c.weights, `cellRules[${i}].weights`)
+    })
+  }
+  if (!Array.isArray(json.paradigms) || !json.paradigms.every((p) => p && typeof p === 'object' && !Array.isArray(p)))
+    throw bad('"paradigms" must be a list of objects')
   const f = learn.features!
   if (!Number.isInteger(f.maxSuffix) || !Number.isInteger(f.maxPrefix) || (f.maxSuffix as number) > 32 || (f.maxPrefix as number) > 32)
     throw bad('options.learn.features are out of range')
 }
 
+function checkWeights(w: unknown, where: string): void {
+  const x = w as Record<string, unknown> | null
+  const ok =
+    !!x &&
+    typeof x === 'object' &&
+    isNum(x.scale) &&
+    (x.scale as number) > 0 &&
+    isStrings(x.features) &&
+    typeof x.local === 'string' &&
+    !!x.shared &&
+    typeof x.shared === 'object' &&
+    !Array.isArray(x.shared) &&
+    Object.values(x.shared as object).every(isNum)
+  if (!ok) throw bad(`${where} are malformed`)
+}
+
 /** Every stem variable a form pattern uses must be one the lemma pattern binds. */
 export function checkParadigm(p: Paradigm): void {
+  if (!Array.isArray(p.lemma)) throw bad(`${p.id}: malformed lemma pattern`)
   const bound = new Set<number>()
   for (const part of p.lemma) {
     if (typeof part === 'number') {
@@ -55,6 +82,18 @@ export function checkParadigm(p: Paradigm): void {
       bound.add(part)
     } else if (typeof part !== 'string') throw bad(`${p.id}: bad lemma pattern`)
   }
+  if (p.shapes !== undefined) {
+    const ok =
+      Array.isArray(p.shapes) &&
+      p.shapes.every(
+        (sh) =>
+          sh && isStrings(sh.seen) && typeof sh.first === 'string' && typeof sh.last === 'string' && isNum(sh.minLength) && isNum(sh.maxLength),
+      )
+    if (!ok) throw bad(`${p.id}: malformed stem shapes`)
+  }
+  if (!Array.isArray(p.cells) || !p.cells.every((c) => c && typeof c.key === 'string' && Array.isArray(c.forms) && c.forms.every(Array.isArray)))
+    throw bad(`${p.id}: malformed cells`)
+  if (!isNum(p.members) || !isStrings(p.examples)) throw bad(`${p.id}: malformed members or examples`)
   for (const c of p.cells)
     for (const f of c.forms)
       for (const part of f)
