@@ -5,11 +5,12 @@
 import { existsSync, readFileSync, writeFileSync } from 'node:fs'
 import { fileURLToPath } from 'node:url'
 import { parseArgs } from 'node:util'
-import { type Entry, rowsToEntries } from '../src/core/lexicon/entry.ts'
+import type { Entry } from '../src/core/lexicon/entry.ts'
 import { analyzeForm } from '../src/core/lookup/analyze.ts'
 import { buildModel } from '../src/core/model/build-model.ts'
 import { decodeModel } from '../src/core/model/decode-model.ts'
 import { encodeModel } from '../src/core/model/encode-model.ts'
+import { readTableRowsFile } from '../test/support/table-rows-file.ts'
 
 const { values } = parseArgs({
   options: {
@@ -29,14 +30,7 @@ if (!values.model && (!existsSync(file('de-verb-train.tsv')) || !existsSync(file
 }
 
 function readTsv(name: string): Entry[] {
-  const rows = readFileSync(file(name), 'utf8')
-    .split('\n')
-    .filter((l) => l && !l.startsWith('#'))
-    .map((l) => {
-      const [lemma, form, upos, feats] = l.split('\t') as [string, string, string, string]
-      return { lemma, form, upos, feats }
-    })
-  return rowsToEntries(rows)
+  return readTableRowsFile(file(name))
 }
 
 // The dictionary: German noun and verb tables, and the held-out lemmas listed without their tables

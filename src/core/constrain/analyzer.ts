@@ -1,22 +1,14 @@
 // What constraint building needs from lookup: a function from a corpus form to its candidate analyses.
 
-/** Where a candidate comes from: listed by the dictionary, predicted from a paradigm, or guessed. */
-export type CandidateSource = 'attested' | 'predicted' | 'guessed'
+import type { CandidateSource, Candidate as LookupCandidate } from '../lookup/candidate.ts'
+
+export type { CandidateSource }
 
 /** Best first: a form's source is the best source among its candidates. */
 export const SOURCE_ORDER: readonly CandidateSource[] = ['attested', 'predicted', 'guessed']
 
-/** One analysis of a form, as lookup returns it. */
-export interface Candidate {
-  lemma: string
-  upos: string
-  /** Canonical FEATS (`_` for none). */
-  feats: string
-  source: CandidateSource
-  /** Confidence in [0, 1]; attested candidates score 1. */
-  score: number
-  paradigm?: string | null
-}
+/** One analysis of a form, as lookup returns it (constraints do not need the paradigm). */
+export type Candidate = Omit<LookupCandidate, 'paradigm'> & { paradigm?: string | null }
 
 /** Where a token stands, which lookup may use (a sentence-initial capital may be an ordinary word). */
 export interface AnalyzeContext {

@@ -4,20 +4,13 @@ import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
 import { learnForEvaluation, scoreInflection } from '../../../src/core/evaluate/evaluate.ts'
 import { corpusEvidence, rerankByCorpus } from '../../../src/core/inflect/corpus-evidence.ts'
-import { rowsToEntries } from '../../../src/core/lexicon/entry.ts'
 import { buildLexicon, type Lexicon } from '../../../src/core/lexicon/lexicon.ts'
+import { readTableRowsFile } from '../../support/table-rows-file.ts'
 
 const demo = (name: string) => new URL(`../../../demo-lexicon/${name}`, import.meta.url)
 
 function readRows(name: string): Lexicon {
-  const rows = readFileSync(demo(name), 'utf8')
-    .split('\n')
-    .filter((l) => l && !l.startsWith('#'))
-    .map((l) => {
-      const [lemma, form, upos, feats] = l.split('\t')
-      return { lemma: lemma!, form: form!, upos: upos!, feats: feats! }
-    })
-  return buildLexicon(rowsToEntries(rows))
+  return buildLexicon(readTableRowsFile(demo(name)))
 }
 
 const empty = buildLexicon([])
