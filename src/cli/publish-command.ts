@@ -1,9 +1,11 @@
 // `formfold publish -m MODEL --name NAME`: a new model version, to local R2 (wrangler's local state) or to a service.
 import { readFile } from 'node:fs/promises'
 import type { Command } from 'commander'
+import { decodeModel } from '../core/model/decode-model.ts'
+import { type ShardedModelFiles, shardModel } from '../core/model/shard-model.ts'
 import { ApiError } from '../http/api-error.ts'
 import { MODEL_NAME } from '../http/model-registry.ts'
-import { publishToService } from '../http/publish-client.ts'
+import { publishShardedToService, publishToService } from '../http/publish-client.ts'
 import { modelCodec } from '../http/served-model.ts'
 import { ModelStore, type VersionInfo } from '../http/store/model-store.ts'
 import { R2BlobStore } from '../http/store/r2-blob-store.ts'
@@ -16,6 +18,7 @@ interface PublishOptions {
   token?: string
   persistTo?: string
   config: string
+  shardBudget?: string
 }
 
 /**
@@ -27,6 +30,7 @@ export async function publishLocal(
   bytes: Uint8Array,
   name: string,
   o: { config: string; persistTo?: string },
+  sharded?: ShardedModelFiles,
 ): Promise<VersionInfo> {
   process.env.WRANGLER_SEND_METRICS ??= 'false'
   process.env.CLOUDFLARE_CF_FETCH_ENABLED ??= 'false'
@@ -38,10 +42,16 @@ export async function publishLocal(
   })
   try {
     if (!proxy.env.BUCKET) throw new Error(`${o.config} has no R2 binding named BUCKET`)
-    const { model: _model, ...info } = await new ModelStore(
-      new R2BlobStore(proxy.env.BUCKET),
-      modelCodec,
-    ).publish(name, bytes)
+    const store = new ModelStore(new R2BlobStore(proxy.env.BUCKET), modelCodec)
+    const encoder = new TextEncoder()
+    // Shards first, the manifest last: the pointer moves only once every shard is stored.
+    if (sharded)
+      for (let i = 0; i < sharded.shards.length; i++)
+        await store.shards.put(name, sharded.refs[i]!.sha256, encoder.encode(sharded.shards[i]!))
+    const { model: _model, ...info } = await store.publish(
+      name,
+      sharded ? encoder.encode(sharded.manifest) : bytes,
+    )
     return info
   } finally {
     await proxy.dispose()
@@ -68,6 +78,10 @@ export function registerPublish(program: Command): void {
     .option('--local', 'publish to local R2 through wrangler (the default without --url)')
     .option('--persist-to <dir>', 'wrangler state directory (default: .wrangler/state/v3)')
     .option('--config <file>', 'wrangler configuration', 'wrangler.toml')
+    .option(
+      '--shard-budget <bytes>',
+      'publish as a sharded model: the form index split by form hash into shards of at most this many bytes, plus a manifest',
+    )
     .action((opts: PublishOptions) => runCommand(() => publish(opts)))
 }
 
@@ -85,8 +99,12 @@ async function publish(o: PublishOptions): Promise<void> {
     process.stderr.write(`formfold publish: ${o.model}: cannot read the model file\n`)
     process.exit(EXIT.badInput)
   }
+  const sharded = o.shardBudget === undefined ? undefined : await shardFiles(bytes, o)
   if (o.url) {
-    const result = await publishToService(o.url, o.name, bytes, o.token ?? process.env.FORMFOLD_WRITE_TOKEN)
+    const token = o.token ?? process.env.FORMFOLD_WRITE_TOKEN
+    const result = sharded
+      ? await publishShardedToService(o.url, o.name, sharded, token)
+      : await publishToService(o.url, o.name, bytes, token)
     if (!result.ok) {
       process.stderr.write(
         `formfold publish: ${result.status} ${result.error.code}: ${result.error.message}\n`,
@@ -97,11 +115,34 @@ async function publish(o: PublishOptions): Promise<void> {
     return
   }
   try {
-    const info = await publishLocal(bytes, o.name, o)
+    const info = await publishLocal(bytes, o.name, o, sharded)
     process.stdout.write(`${JSON.stringify({ name: o.name, ...info })}\n`)
   } catch (err) {
     if (!(err instanceof ApiError)) throw err
     process.stderr.write(`formfold publish: ${err.code}: ${err.message}\n`)
     process.exit(err.status < 500 ? EXIT.badInput : EXIT.failed)
   }
+}
+
+/** The shards and manifest of a model file under `--shard-budget` (summary on stderr). */
+async function shardFiles(bytes: Uint8Array, o: PublishOptions): Promise<ShardedModelFiles> {
+  const budget = Number(o.shardBudget)
+  if (!Number.isInteger(budget) || budget < 1024) {
+    process.stderr.write(`formfold publish: --shard-budget must be a whole number of bytes, at least 1024\n`)
+    process.exit(EXIT.badInput)
+  }
+  let model: ReturnType<typeof decodeModel>
+  try {
+    model = decodeModel(new TextDecoder().decode(bytes))
+  } catch (err) {
+    process.stderr.write(`formfold publish: ${o.model}: ${(err as Error).message}\n`)
+    process.exit(EXIT.badInput)
+  }
+  const files = await shardModel(model, budget)
+  const total = files.refs.reduce((n, r) => n + r.bytes, 0)
+  process.stderr.write(
+    `formfold publish: ${files.refs.length} shards (${total} bytes, largest ${Math.max(...files.refs.map((r) => r.bytes))}), ` +
+      `manifest ${new TextEncoder().encode(files.manifest).byteLength} bytes\n`,
+  )
+  return files
 }

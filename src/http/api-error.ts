@@ -24,6 +24,7 @@ export type ApiErrorCode =
   | 'invalid-content'
   | 'bad-encoding'
   | 'store-failed'
+  | 'missing-shards'
   | 'internal'
 
 /** The JSON body of every error response. */

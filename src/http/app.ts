@@ -13,6 +13,7 @@ import { registerHealth } from './routes/health.ts'
 import { registerLemmas } from './routes/lemmas.ts'
 import { registerModelRoutes } from './routes/models.ts'
 import { registerParadigms } from './routes/paradigms.ts'
+import { registerShardRoutes } from './routes/shards.ts'
 import { strictUrl } from './strict-input.ts'
 
 /** How an app finds its models (default: the R2 binding, or memory under Node). */
@@ -46,6 +47,7 @@ export function createApp(options: AppOptions = {}): OpenAPIHono<AppEnv> {
   registerParadigms(app)
   registerConstraints(app)
   registerModelRoutes(app)
+  registerShardRoutes(app)
   registerPage(app)
 
   app.openAPIRegistry.registerComponent('securitySchemes', 'bearer', { type: 'http', scheme: 'bearer' })

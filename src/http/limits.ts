@@ -53,6 +53,12 @@ export const MAX_CACHED_MODELS = 8
 /** Analyze answers kept per model and option set (a model is immutable, so an answer never goes stale). */
 export const MAX_CACHED_ANSWERS = 20_000
 
+/** Shard file bytes kept decoded per sharded model and isolate (the LRU budget; least recently used out first). */
+export const SHARD_CACHE_BYTES = 32 * 1024 * 1024
+
+/** A batch is looked up in steps that each need at most this many shards of a sharded model. */
+export const MAX_SHARDS_PER_STEP = 4
+
 /**
  * All limits by name, for `/health` and the docs.
  * @example LIMITS.maxBatchForms // 1000
@@ -69,4 +75,6 @@ export const LIMITS = {
   maxExpandLemmas: MAX_EXPAND_LEMMAS,
   maxAlternatives: MAX_ALTERNATIVES,
   maxTop: MAX_TOP,
+  shardCacheBytes: SHARD_CACHE_BYTES,
+  maxShardsPerStep: MAX_SHARDS_PER_STEP,
 } as const

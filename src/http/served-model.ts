@@ -1,6 +1,9 @@
 // The model as the service sees it: the core model, its file codec, its summary, and the media type of its file.
+import { ShardedFormIndex } from '../core/lookup/sharded-index.ts'
 import { decodeModel } from '../core/model/decode-model.ts'
 import type { Model } from '../core/model/model.ts'
+import { checkManifest, decodeShardedModel, isShardedManifest } from '../core/model/read-sharded.ts'
+import { SHARD_CACHE_BYTES } from './limits.ts'
 import type { ModelCodec, ModelSummary } from './store/model-store.ts'
 
 /** The model every route answers from. */
@@ -26,8 +29,17 @@ export function summarizeModel(model: Model): ModelSummary {
     paradigms: model.inflection.book.paradigms.length,
     forms: model.index.formCount,
     analyses: model.index.analysisCount,
+    ...(model.index instanceof ShardedFormIndex ? { shards: model.index.shardCount } : {}),
   }
 }
 
-/** How the model store reads and describes model files. */
-export const modelCodec: ModelCodec<Model> = { decode: decodeModel, summarize: summarizeModel }
+/**
+ * How the model store reads and describes model files: a whole model file, or a sharded model's manifest
+ * (its shards read from the store on demand, `SHARD_CACHE_BYTES` of them kept decoded per isolate).
+ */
+export const modelCodec: ModelCodec<Model> = {
+  decode: (text, shards) =>
+    isShardedManifest(text) ? decodeShardedModel(text, shards, SHARD_CACHE_BYTES) : decodeModel(text),
+  summarize: summarizeModel,
+  shardsOf: (text) => (isShardedManifest(text) ? checkManifest(JSON.parse(text)) : []),
+}

@@ -212,6 +212,7 @@ export function describeRoutes(target: () => RouteTarget): void {
           '/v1/models',
           '/v1/models/{name}',
           '/v1/models/{name}/versions/{v}',
+          '/v1/models/{name}/shards/{sha256}',
           '/v1/paradigms',
           '/v1/paradigms/{id}',
         ].sort(),

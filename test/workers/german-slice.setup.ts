@@ -1,4 +1,5 @@
-// Global setup of the workers project (runs in Node): the German verb slice, and the model `formfold learn` makes of it.
+// Global setup of the workers project (runs in Node): the German verb slice and the model `formfold learn` makes
+// of it; a small German model of the three npm sets for the sharded-serving test.
 import { execFile } from 'node:child_process'
 import { createHash } from 'node:crypto'
 import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises'
@@ -7,6 +8,7 @@ import { join } from 'node:path'
 import { promisify } from 'node:util'
 import type { TestProject } from 'vitest/node'
 import { germanVerbSlice } from '../support/german-verb-slice.ts'
+import { germanSampleModel } from './german-sample.ts'
 
 /** Lemmas in the slice the workers suite uploads (a tenth of them without their tables). */
 export const SLICE_LEMMAS = 2000
@@ -24,6 +26,8 @@ export interface ProvidedSlice {
 declare module 'vitest' {
   export interface ProvidedContext {
     germanVerbSlice: ProvidedSlice
+    /** The model file of `germanSampleModel()` (test/workers/sharded-german.test.ts shards and serves it). */
+    germanSampleModel: string
   }
 }
 
@@ -43,6 +47,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   })
   const seconds = (performance.now() - t0) / 1000
   const bytes = await readFile(model)
+  project.provide('germanSampleModel', germanSampleModel())
   project.provide('germanVerbSlice', {
     jsonl: slice.jsonl,
     withheld: slice.withheld,

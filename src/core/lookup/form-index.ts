@@ -36,8 +36,21 @@ export interface FormIndex {
   get(form: string): readonly IndexedAnalysis[] | undefined
   /** Indexed forms whose diacritic-folded spelling (see `foldDiacritics`) is `folded`. */
   folded(folded: string): readonly string[]
-  /** Make `get` and `folded` answer for these keys. A whole index resolves at once. */
+  /**
+   * Make `get` and `folded` answer for these keys (plain forms or folded keys; for a folded key, also `get`
+   * of the forms it names). A whole index resolves at once; `get` of a key not loaded throws.
+   */
   load(keys: Iterable<string>): Promise<void>
-  /** Every indexed form, in index order (for constraint files over the whole lexicon). */
+  /**
+   * An index for one unit of work (a request, a batch): the whole index is its own session; a sharded one
+   * gives a fresh view that holds the shards it loads until it is dropped.
+   */
+  session(): FormIndex
+  /**
+   * Every indexed form, in index order (for constraint files over the whole lexicon). A sharded index lists
+   * them only once every shard is loaded; iterate `formGroups` there.
+   */
   forms(): Iterable<string>
+  /** Every indexed form, in groups that each sit in one part of the index (whole: one group). */
+  formGroups(): AsyncIterable<readonly string[]>
 }

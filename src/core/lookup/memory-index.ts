@@ -193,7 +193,15 @@ export class MemoryFormIndex implements FormIndex {
     return Promise.resolve()
   }
 
+  session(): FormIndex {
+    return this
+  }
+
   forms(): Iterable<string> {
     return this.slots.keys()
+  }
+
+  async *formGroups(): AsyncIterable<readonly string[]> {
+    yield [...this.slots.keys()]
   }
 }

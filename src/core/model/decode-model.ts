@@ -38,6 +38,22 @@ export function decodeModel(text: string): Model {
   } catch {
     throw bad('not JSON')
   }
+  const head = decodeModelHead(json)
+  const model = assembleModel(head.inflection, head.kept, head.options)
+  if (head.corpusTokens !== undefined) model.corpusTokens = head.corpusTokens
+  smokeTestModel(model)
+  return model
+}
+
+/** A model without its form index: what a sharded model's manifest carries besides its shard list. */
+export type ModelHead = Omit<Model, 'index'>
+
+/**
+ * Check a parsed model file and rebuild everything but the form index (a sharded model reads its index
+ * from shards); throws `ProblemError` (`bad-model`) like `decodeModel`.
+ * @example decodeModelHead(JSON.parse(text)).inflection.book.paradigms.length // 31
+ */
+export function decodeModelHead(json: ModelJson): ModelHead {
   checkHeader(json)
   checkModelJson(json as unknown as Record<string, unknown>)
   const cellsOf = (u: string) => json.cellKeys[u] ?? []
@@ -81,10 +97,9 @@ export function decodeModel(text: string): Model {
   const completion = json.options.completion ?? 0
   const completionTables = json.options.completionTables ?? tablesPerLemma
   const options = { tablesPerLemma, tableFloor, weightDecimals, learn, completion, completionTables }
-  const model = assembleModel(inflection, kept, options)
-  if (json.corpus) model.corpusTokens = json.corpus.tokens
-  smokeTestModel(model)
-  return model
+  const head: ModelHead = { inflection, kept, options }
+  if (json.corpus) head.corpusTokens = json.corpus.tokens
+  return head
 }
 
 function checkHeader(json: ModelJson): void {

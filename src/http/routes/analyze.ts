@@ -94,8 +94,9 @@ export function registerAnalyze(app: OpenAPIHono<AppEnv>): void {
   app.openapi(getRoute, async (c) => {
     const { form, model: name, top, fold, guess } = c.req.valid('query')
     const { model } = await useModel(c, name)
-    const body = analyzeJson(model, form, { top, foldDiacritics: fold === '1', guess: guess !== '0' })
-    return c.body(body, 200, JSON_TYPE) as unknown as TypedJson<typeof Analysis>
+    const options = { top, foldDiacritics: fold === '1', guess: guess !== '0' }
+    const [body] = await analyzeJson(model, [form], options)
+    return c.body(body!, 200, JSON_TYPE) as unknown as TypedJson<typeof Analysis>
   })
 
   app.openapi(postRoute, async (c) => {
@@ -104,7 +105,7 @@ export function registerAnalyze(app: OpenAPIHono<AppEnv>): void {
       throw tooLarge(`a batch of ${forms.length} forms`, MAX_BATCH_FORMS, 'formfold analyze')
     const { model } = await useModel(c, c.req.valid('query').model)
     const options = { top, foldDiacritics: fold === true, guess: guess !== false }
-    const body = `{"results":[${forms.map((form) => analyzeJson(model, form, options)).join(',')}]}`
+    const body = `{"results":[${(await analyzeJson(model, forms, options)).join(',')}]}`
     return c.body(body, 200, JSON_TYPE) as unknown as TypedJson<typeof Batch>
   })
 }

@@ -1,15 +1,22 @@
 // Constraint files: `POST /v1/constraints` for an uploaded corpus (report alongside), `GET /v1/constraints.tsv` for the lexicon.
 import { createRoute, type OpenAPIHono, z } from '@hono/zod-openapi'
-import { constrainCorpus, lexiconConstraints } from '../../core/constrain/constrain-corpus.ts'
-import { type ConstraintFileHeader, writeConstraintFile } from '../../core/constrain/constraint-file.ts'
+import { constrainTally, countTokens, lexiconConstraints } from '../../core/constrain/constrain-corpus.ts'
+import {
+  type ConstraintFileHeader,
+  constraintHeaderLines,
+  formatConstraintRow,
+  writeConstraintFile,
+} from '../../core/constrain/constraint-file.ts'
 import type { CoverageReport } from '../../core/constrain/coverage-report.ts'
+import { analyzeForm } from '../../core/lookup/analyze.ts'
 import { openCorpus } from '../../formats/corpus-reader.ts'
 import { encodeLines } from '../../formats/encode-lines.ts'
 import { ApiError } from '../api-error.ts'
 import type { AppEnv } from '../env.ts'
 import { MAX_CORPUS_BYTES } from '../limits.ts'
-import { analyzerOf } from '../lookup.ts'
+import { analyzerFor, loadedSteps } from '../lookup.ts'
 import { errorResponses, ModelQuery } from '../schemas/common.ts'
+import type { ServedModel } from '../served-model.ts'
 import { mediaType, readBytes } from '../strict-input.ts'
 import { useModel } from '../use-model.ts'
 
@@ -97,7 +104,12 @@ export function registerConstraints(app: OpenAPIHono<AppEnv>): void {
       file: 'corpus',
       format: format ?? (type === 'text/plain' ? undefined : 'conllu'),
     })
-    const { rows, report, tally } = await constrainCorpus(corpus, analyzerOf(loaded.model), { level })
+    const tally = await countTokens(corpus)
+    const analyzer = await analyzerFor(
+      loaded.model,
+      [...tally.byFrequency()].map(([form]) => form),
+    )
+    const { rows, report } = constrainTally(tally, analyzer, { level })
     const header: ConstraintFileHeader = {
       model: { name: loaded.name, version: loaded.version ?? 'embedded' },
       corpus: { file: `upload (${corpus.format})`, tokens: tally.tokens, types: tally.types },
@@ -123,8 +135,27 @@ export function registerConstraints(app: OpenAPIHono<AppEnv>): void {
       corpus: null,
       options: { level },
     }
-    const rows = lexiconConstraints(loaded.model.index.forms(), analyzerOf(loaded.model), { level })
     c.header('Content-Disposition', `attachment; filename="${loaded.name}-constraints.tsv"`)
-    return c.body(encodeLines(writeConstraintFile(rows, header, 'tsv')), 200, { 'Content-Type': TSV })
+    return c.body(encodeLines(lexiconFile(loaded.model, header, level)), 200, { 'Content-Type': TSV })
   })
+}
+
+/**
+ * The whole-lexicon file, one part of the index at a time: each group of forms is loaded (a sharded model
+ * fetches its shard) and written before the next, so memory holds one group beside the shard cache.
+ */
+async function* lexiconFile(
+  model: ServedModel,
+  header: ConstraintFileHeader,
+  level: 'upos' | 'full',
+): AsyncGenerator<string> {
+  for (const line of constraintHeaderLines(header)) yield `${line}\n`
+  for await (const group of model.index.formGroups()) {
+    for await (const { forms, index } of loadedSteps(model, group, {})) {
+      const view = { ...model, index }
+      const analyzer = (form: string) => analyzeForm(view, form).candidates
+      for (const row of lexiconConstraints(forms, analyzer, { level }))
+        yield `${formatConstraintRow(row, level)}\n`
+    }
+  }
 }

@@ -1,15 +1,27 @@
 // Published models by name and version, with a pointer that moves only after a new version is written and checked.
 import { ProblemError } from '../../core/lexicon/problem.ts'
+import type { ShardRef } from '../../core/lookup/shard-cache.ts'
+import { sha256Hex } from '../../core/lookup/shard-route.ts'
 import { ApiError, problemError } from '../api-error.ts'
 import type { BlobStore } from './blob-store.ts'
+import { ShardObjects } from './shard-objects.ts'
+
+export { sha256Hex }
 
 /** Counts that describe a model (lemmas, tables, paradigms, forms…), shown by the models routes. */
 export type ModelSummary = Record<string, number>
 
-/** How the store turns bytes into a model and describes it; decoding is the validation of a publish. */
+/** Reads the bytes of one shard of a sharded model (named by its hash in the manifest). */
+export type ShardBytes = (i: number, ref: ShardRef) => Promise<Uint8Array>
+
+/**
+ * How the store turns bytes into a model and describes it; decoding is the validation of a publish.
+ * `shardsOf` lists the shards a sharded manifest names (empty for a whole model file).
+ */
 export interface ModelCodec<M> {
-  decode(text: string): M
+  decode(text: string, shards: ShardBytes): M
   summarize(model: M): ModelSummary
+  shardsOf(text: string): ShardRef[]
 }
 
 /** One stored version. */
@@ -34,15 +46,6 @@ const pointerKey = (name: string) => `${ROOT}${name}/pointer.json`
 const VERSION_KEY = /\/versions\/(\d{8})\.model$/
 
 /**
- * Hex SHA-256 of bytes (Web Crypto: the same in Node and workerd).
- * @example await sha256Hex(new TextEncoder().encode('abc')) // 'ba7816bf…'
- */
-export async function sha256Hex(bytes: Uint8Array): Promise<string> {
-  const digest = new Uint8Array(await crypto.subtle.digest('SHA-256', bytes as Uint8Array<ArrayBuffer>))
-  return [...digest].map((b) => b.toString(16).padStart(2, '0')).join('')
-}
-
-/**
  * Models in a `BlobStore`: `models/<name>/versions/<n>.model` plus `models/<name>/pointer.json`.
  * `publish` decodes the bytes first (refusing a corrupt model with 422), writes the version, reads it
  * back and compares its hash, and only then rewrites the pointer. Any failure before that last step
@@ -55,10 +58,13 @@ export async function sha256Hex(bytes: Uint8Array): Promise<string> {
 export class ModelStore<M> {
   readonly #blobs: BlobStore
   readonly #codec: ModelCodec<M>
+  /** The shard objects of sharded versions (uploaded before their manifest is published). */
+  readonly shards: ShardObjects
 
   constructor(blobs: BlobStore, codec: ModelCodec<M>) {
     this.#blobs = blobs
     this.#codec = codec
+    this.shards = new ShardObjects(blobs)
   }
 
   /** Names that have a served version, sorted. */
@@ -104,16 +110,17 @@ export class ModelStore<M> {
     })
   }
 
-  /** Decode bytes as a model, or the 422 saying why they are not one. */
-  validate(bytes: Uint8Array): M {
-    let text: string
+  /**
+   * Decode bytes as a model of `name` (a sharded manifest reads its shards from this store when a lookup
+   * needs them), or the 422 saying why they are not one.
+   */
+  validate(bytes: Uint8Array, name = ''): M {
+    return this.#decode(utf8(bytes), name)
+  }
+
+  #decode(text: string, name: string): M {
     try {
-      text = new TextDecoder('utf-8', { fatal: true }).decode(bytes)
-    } catch {
-      throw new ApiError(422, 'bad-utf8', 'the model file is not valid UTF-8')
-    }
-    try {
-      return this.#codec.decode(text)
+      return this.#codec.decode(text, (_, ref) => this.shards.bytes(name, ref))
     } catch (err) {
       if (err instanceof ProblemError) throw problemError(err.problem)
       throw problemError({ code: 'bad-model', message: `not a formfold model: ${(err as Error).message}` })
@@ -129,7 +136,17 @@ export class ModelStore<M> {
     bytes: Uint8Array,
     facts: ModelSummary = {},
   ): Promise<VersionInfo & { model: M }> {
-    const model = this.validate(bytes)
+    const text = utf8(bytes)
+    const model = this.#decode(text, name)
+    const missing = await this.shards.missing(name, this.#codec.shardsOf(text))
+    if (missing.length > 0) {
+      throw new ApiError(
+        422,
+        'missing-shards',
+        `${missing.length} shard(s) the manifest lists are not uploaded; upload them first`,
+        { missing: missing.slice(0, 10).map((r) => r.sha256) },
+      )
+    }
     const summary = { ...this.#codec.summarize(model), ...facts }
     const sha256 = await sha256Hex(bytes)
     const existing = await this.versions(name)
@@ -190,7 +207,7 @@ export class ModelStore<M> {
     if ((await sha256Hex(blob.bytes)) !== sha256) {
       throw new ApiError(503, 'store-failed', `version ${version} of "${name}" does not match its hash`)
     }
-    return { version, sha256: sha256!, model: this.validate(blob.bytes) }
+    return { version, sha256: sha256!, model: this.validate(blob.bytes, name) }
   }
 
   /** Remove a version that is not served (409 for the served one, 404 for one that does not exist). */
@@ -210,7 +227,36 @@ export class ModelStore<M> {
         version,
       })
     }
+    const deleted = await this.#blobs.get(key)
     await this.#blobs.delete(key)
+    if (deleted && this.#listed(deleted.bytes).length > 0) await this.#collectShards(name)
+  }
+
+  /** The shards a stored version lists (none for a whole model file, or one that no longer reads). */
+  #listed(bytes: Uint8Array): ShardRef[] {
+    try {
+      return this.#codec.shardsOf(utf8(bytes))
+    } catch {
+      return []
+    }
+  }
+
+  /** Remove the shards no remaining version lists (after deleting a sharded version). */
+  async #collectShards(name: string): Promise<void> {
+    const kept = new Set<string>()
+    for (const v of await this.versions(name)) {
+      const blob = await this.#blobs.get(versionKey(name, v.version))
+      if (blob) for (const r of this.#listed(blob.bytes)) kept.add(r.sha256)
+    }
+    await this.shards.collect(name, kept)
+  }
+}
+
+function utf8(bytes: Uint8Array): string {
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes)
+  } catch {
+    throw new ApiError(422, 'bad-utf8', 'the model file is not valid UTF-8')
   }
 }
 

@@ -1,0 +1,51 @@
+// Which shard a form lives in: FNV-1a 32 over the UTF-8 bytes of its routing key (NFC, folded, lower case).
+import { foldDiacritics } from './normalize.ts'
+
+/** How shards are chosen, as the manifest names it. */
+export const SHARD_HASH = 'fnv1a32-utf8'
+/** The key hashed, as the manifest names it: NFC, diacritics folded, lower-cased. */
+export const SHARD_ROUTE = 'nfc-fold-lower'
+
+const encoder = new TextEncoder()
+
+/**
+ * FNV-1a, 32 bits (offset basis 2166136261, prime 16777619; Fowler, Noll & Vo), over bytes.
+ * @example fnv1a32(new TextEncoder().encode('a')) // 0xe40c292c
+ */
+export function fnv1a32(bytes: Uint8Array): number {
+  let h = 0x811c9dc5
+  for (let i = 0; i < bytes.length; i++) {
+    h ^= bytes[i]!
+    h = Math.imul(h, 0x01000193)
+  }
+  return h >>> 0
+}
+
+/**
+ * The string a form is routed by. Every spelling one lookup of a token tries (its lower- and title-case
+ * forms, its diacritic-folded forms) has the same routing key, so a token's lookups stay in one shard.
+ * @example routeKey('Mäntel') // 'mantel'
+ */
+export function routeKey(form: string): string {
+  return foldDiacritics(form.normalize('NFC')).toLowerCase()
+}
+
+/**
+ * The shard of a form (or of a folded key) among `shards`.
+ * @example shardOf('Tage', 8) === shardOf('TAGE', 8) // true
+ */
+export function shardOf(form: string, shards: number): number {
+  if (shards <= 1) return 0
+  return fnv1a32(encoder.encode(routeKey(form))) % shards
+}
+
+/**
+ * Hex SHA-256 of bytes (Web Crypto, a global in Node, workerd and browsers).
+ * @example await sha256Hex(new TextEncoder().encode('abc')) // 'ba7816bf…'
+ */
+export async function sha256Hex(bytes: Uint8Array): Promise<string> {
+  const digest = new Uint8Array(await crypto.subtle.digest('SHA-256', bytes as Uint8Array<ArrayBuffer>))
+  let out = ''
+  for (const b of digest) out += b.toString(16).padStart(2, '0')
+  return out
+}
