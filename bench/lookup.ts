@@ -1,15 +1,20 @@
 // Lookup speed and size: analyze() over every form of a large model against a bare Map.get of the same
-// strings, the model file's bytes per form, and its load time. Reads the DDN13 German sets from
+// strings, the model file's bytes per form, and its load time; the same model sharded (sizes, and analyze
+// through a sharded index against the whole one, warm and per request). Reads the DDN13 German sets from
 // ../shared/bench-data/ddn13 (beside the repository, not part of it) and skips when they are missing.
-// Run: npm run bench:lookup -- [--json] [--rounds N] [--model FILE] [--save-model FILE]
+// Run: npm run bench:lookup -- [--json] [--rounds N] [--model FILE] [--save-model FILE] [--shard-budget BYTES]
 import { existsSync, readFileSync, writeFileSync } from 'node:fs'
 import { fileURLToPath } from 'node:url'
 import { parseArgs } from 'node:util'
 import type { Entry } from '../src/core/lexicon/entry.ts'
 import { analyzeForm } from '../src/core/lookup/analyze.ts'
+import { lookupKeys } from '../src/core/lookup/normalize.ts'
+import type { ShardedFormIndex } from '../src/core/lookup/sharded-index.ts'
 import { buildModel } from '../src/core/model/build-model.ts'
 import { decodeModel } from '../src/core/model/decode-model.ts'
 import { encodeModel } from '../src/core/model/encode-model.ts'
+import { decodeShardedModel } from '../src/core/model/read-sharded.ts'
+import { shardModel } from '../src/core/model/shard-model.ts'
 import { readTableRowsFile } from '../test/support/table-rows-file.ts'
 
 const { values } = parseArgs({
@@ -18,6 +23,7 @@ const { values } = parseArgs({
     rounds: { type: 'string', default: '5' },
     model: { type: 'string' },
     'save-model': { type: 'string' },
+    'shard-budget': { type: 'string' },
   },
 })
 const log = (text: string) => process.stderr.write(`${text}\n`)
@@ -89,6 +95,61 @@ const nsPerForm = (ms: number) => (ms * 1e6) / forms.length
 const mapNs = nsPerForm(median(mapMs))
 const analyzeNs = nsPerForm(median(analyzeMs))
 
+// Sharded: by default a budget of an eighth of the index's bytes (8 or more shards), all in memory here, so the
+// figures are the index's own cost (decoding a shard, routing, sessions), not the network's.
+const encoder = new TextEncoder()
+const indexBytes = (await shardModel(model, Number.MAX_SAFE_INTEGER)).refs[0]!.bytes
+const budget = Number(values['shard-budget'] ?? Math.ceil(indexBytes / 8))
+const files = await shardModel(model, budget)
+const manifestBytes = encoder.encode(files.manifest).byteLength
+const sharded = decodeShardedModel(files.manifest, async (i) => encoder.encode(files.shards[i]!), Infinity)
+t0 = performance.now()
+const all = sharded.index.session()
+await all.load(forms)
+const shardLoadMs = performance.now() - t0
+const warm = { ...sharded, index: all }
+const timeSharded = () => {
+  const t = performance.now()
+  for (const f of forms) sink += analyzeForm(warm, f).candidates.length
+  return performance.now() - t
+}
+timeSharded()
+// One request per form: a fresh session loads the form's spellings (its shard, from the cache), then analyzes.
+const sample = forms.filter((_, i) => i % Math.max(1, Math.floor(forms.length / 5000)) === 0)
+const timeRequests = async (m: typeof sharded) => {
+  const t = performance.now()
+  for (const f of sample) {
+    const index = m.index.session()
+    await index.load(lookupKeys([f]))
+    sink += analyzeForm({ ...m, index }, f).candidates.length
+  }
+  return ((performance.now() - t) * 1e6) / sample.length
+}
+const shardedMs: number[] = []
+const wholeMs: number[] = []
+const requestNs: number[] = []
+const wholeRequestNs: number[] = []
+for (let r = 0; r < Number(values.rounds); r++) {
+  wholeMs.push(timeAnalyze())
+  shardedMs.push(timeSharded())
+  wholeRequestNs.push(await timeRequests(model))
+  requestNs.push(await timeRequests(sharded))
+}
+const shards = files.refs.map((r) => r.bytes)
+const shardResult = {
+  shardBudget: budget,
+  shards: files.refs.length,
+  shardBytesMin: Math.min(...shards),
+  shardBytesMax: Math.max(...shards),
+  shardBytesTotal: shards.reduce((a, b) => a + b, 0),
+  manifestBytes,
+  shardDecodeMsPerShard: shardLoadMs / files.refs.length,
+  shardedAnalyzeVsWhole: median(shardedMs) / median(wholeMs),
+  shardedRequestNsPerForm: median(requestNs),
+  shardedRequestVsWhole: median(requestNs) / median(wholeRequestNs),
+  shardsFetched: (sharded.index as ShardedFormIndex).cache.fetched,
+}
+
 const result = {
   lemmas: model.inflection.lexicon.entries.length,
   forms: forms.length,
@@ -102,6 +163,7 @@ const result = {
   analyzeNsPerForm: analyzeNs,
   analyzeVsMap: analyzeNs / mapNs,
   analyzeColdVsMap: coldAnalyze / coldMap,
+  ...shardResult,
 }
 log(
   `model: ${result.lemmas} lemmas, ${result.forms} forms, ${result.analyses} analyses, learned in ${learnSeconds.toFixed(1)} s`,
@@ -111,5 +173,13 @@ log(
 )
 log(
   `analyze: ${analyzeNs.toFixed(0)} ns per form; Map.get: ${mapNs.toFixed(0)} ns; analyzeVsMap ${result.analyzeVsMap.toFixed(2)}; first pass (answers built) ${result.analyzeColdVsMap.toFixed(2)}${sink > 0 ? '' : ' (no answers?)'}`,
+)
+log(
+  `sharded (budget ${budget} bytes): ${files.refs.length} shards of ${shardResult.shardBytesMin}–${shardResult.shardBytesMax} bytes ` +
+    `(${shardResult.shardBytesTotal} in all), manifest ${manifestBytes} bytes; decode ${shardResult.shardDecodeMsPerShard.toFixed(1)} ms per shard`,
+)
+log(
+  `sharded analyze (all shards resident) / whole ${shardResult.shardedAnalyzeVsWhole.toFixed(2)}; one request per form ` +
+    `(session + load + analyze) ${shardResult.shardedRequestNsPerForm.toFixed(0)} ns = ${shardResult.shardedRequestVsWhole.toFixed(2)} × the whole index's`,
 )
 if (values.json) process.stdout.write(`${JSON.stringify(result)}\n`)

@@ -6,8 +6,6 @@ export const SHARD_HASH = 'fnv1a32-utf8'
 /** The key hashed, as the manifest names it: NFC, diacritics folded, lower-cased. */
 export const SHARD_ROUTE = 'nfc-fold-lower'
 
-const encoder = new TextEncoder()
-
 /**
  * FNV-1a, 32 bits (offset basis 2166136261, prime 16777619; Fowler, Noll & Vo), over bytes.
  * @example fnv1a32(new TextEncoder().encode('a')) // 0xe40c292c
@@ -27,7 +25,39 @@ export function fnv1a32(bytes: Uint8Array): number {
  * @example routeKey('Mäntel') // 'mantel'
  */
 export function routeKey(form: string): string {
-  return foldDiacritics(form.normalize('NFC')).toLowerCase()
+  return isAscii(form) ? form.toLowerCase() : foldDiacritics(form.normalize('NFC')).toLowerCase()
+}
+
+function isAscii(s: string): boolean {
+  for (let i = 0; i < s.length; i++) if (s.charCodeAt(i) >= 0x80) return false
+  return true
+}
+
+/** FNV-1a 32 of a string's UTF-8 bytes, without encoding it first (same value as `fnv1a32(encode(s))`). */
+export function fnv1a32Utf8(s: string): number {
+  let h = 0x811c9dc5
+  const byte = (b: number) => {
+    h ^= b
+    h = Math.imul(h, 0x01000193)
+  }
+  for (const ch of s) {
+    const c = ch.codePointAt(0)!
+    if (c < 0x80) byte(c)
+    else if (c < 0x800) {
+      byte(0xc0 | (c >> 6))
+      byte(0x80 | (c & 63))
+    } else if (c < 0x10000) {
+      byte(0xe0 | (c >> 12))
+      byte(0x80 | ((c >> 6) & 63))
+      byte(0x80 | (c & 63))
+    } else {
+      byte(0xf0 | (c >> 18))
+      byte(0x80 | ((c >> 12) & 63))
+      byte(0x80 | ((c >> 6) & 63))
+      byte(0x80 | (c & 63))
+    }
+  }
+  return h >>> 0
 }
 
 /**
@@ -36,7 +66,7 @@ export function routeKey(form: string): string {
  */
 export function shardOf(form: string, shards: number): number {
   if (shards <= 1) return 0
-  return fnv1a32(encoder.encode(routeKey(form))) % shards
+  return fnv1a32Utf8(routeKey(form)) % shards
 }
 
 /**

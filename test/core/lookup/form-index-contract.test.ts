@@ -176,3 +176,11 @@ formIndexContract('sharded', async (records: IndexRecord[]) => {
 it('the record contract covers forms in more than one shard', () => {
   expect(new Set(contractRecords.map((r) => shardOf(r.form, 3))).size).toBeGreaterThan(1)
 })
+
+it('hashes a string as FNV-1a 32 over its UTF-8 bytes (offset basis 2166136261, prime 16777619)', async () => {
+  const { fnv1a32, fnv1a32Utf8 } = await import('../../../src/core/lookup/shard-route.ts')
+  // FNV-1a 32 of "a" is 0xe40c292c (the published test vector, from memory).
+  expect(fnv1a32(encoder.encode('a'))).toBe(0xe40c292c)
+  for (const s of ['a', 'Mäntel', 'straße', '€', '𝔘x', ''])
+    expect(fnv1a32Utf8(s)).toBe(fnv1a32(encoder.encode(s)))
+})
