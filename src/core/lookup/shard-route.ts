@@ -33,29 +33,33 @@ function isAscii(s: string): boolean {
   return true
 }
 
-/** FNV-1a 32 of a string's UTF-8 bytes, without encoding it first (same value as `fnv1a32(encode(s))`). */
+/** FNV-1a 32 of a well-formed string's UTF-8 bytes, without encoding it first (as `fnv1a32(encode(s))`). */
 export function fnv1a32Utf8(s: string): number {
   let h = 0x811c9dc5
-  const byte = (b: number) => {
-    h ^= b
-    h = Math.imul(h, 0x01000193)
-  }
-  for (const ch of s) {
-    const c = ch.codePointAt(0)!
-    if (c < 0x80) byte(c)
-    else if (c < 0x800) {
-      byte(0xc0 | (c >> 6))
-      byte(0x80 | (c & 63))
-    } else if (c < 0x10000) {
-      byte(0xe0 | (c >> 12))
-      byte(0x80 | ((c >> 6) & 63))
-      byte(0x80 | (c & 63))
-    } else {
-      byte(0xf0 | (c >> 18))
-      byte(0x80 | ((c >> 12) & 63))
-      byte(0x80 | ((c >> 6) & 63))
-      byte(0x80 | (c & 63))
+  for (let i = 0; i < s.length; i++) {
+    let c = s.charCodeAt(i)
+    if (c < 0x80) {
+      h = Math.imul(h ^ c, 0x01000193)
+      continue
     }
+    if (c >= 0xd800 && c < 0xdc00 && i + 1 < s.length) {
+      const d = s.charCodeAt(i + 1)
+      if (d >= 0xdc00 && d < 0xe000) {
+        c = 0x10000 + ((c - 0xd800) << 10) + (d - 0xdc00)
+        i++
+      }
+    }
+    if (c < 0x800) {
+      h = Math.imul(h ^ (0xc0 | (c >> 6)), 0x01000193)
+    } else if (c < 0x10000) {
+      h = Math.imul(h ^ (0xe0 | (c >> 12)), 0x01000193)
+      h = Math.imul(h ^ (0x80 | ((c >> 6) & 63)), 0x01000193)
+    } else {
+      h = Math.imul(h ^ (0xf0 | (c >> 18)), 0x01000193)
+      h = Math.imul(h ^ (0x80 | ((c >> 12) & 63)), 0x01000193)
+      h = Math.imul(h ^ (0x80 | ((c >> 6) & 63)), 0x01000193)
+    }
+    h = Math.imul(h ^ (0x80 | (c & 63)), 0x01000193)
   }
   return h >>> 0
 }
