@@ -14,6 +14,8 @@ export interface Candidate {
 /** Paradigms of one book, indexed for fast candidate search and analogy features. */
 export class CandidateFinder {
   private readonly byUpos = new Map<string, number[]>()
+  /** Per UPOS, paradigms by the literal their lemma pattern ends with ('' when it ends with a stem). */
+  private readonly byEnding = new Map<string, Map<string, number[]>>()
   private readonly suffixes: SuffixIndex[]
   /** Per paradigm: what its cells put before the stem, as one signature shared by paradigms alike there. */
   private readonly leftEdits: string[]
@@ -26,6 +28,11 @@ export class CandidateFinder {
       const list = this.byUpos.get(p.upos) ?? []
       list.push(i)
       this.byUpos.set(p.upos, list)
+      const last = p.lemma[p.lemma.length - 1]
+      const ending = typeof last === 'string' ? last : ''
+      const groups = this.byEnding.get(p.upos) ?? new Map<string, number[]>()
+      groups.set(ending, [...(groups.get(ending) ?? []), i])
+      this.byEnding.set(p.upos, groups)
     })
     this.leftEdits = paradigms.map(leftEdits)
     this.suffixes = paradigms.map((_, i) => {
@@ -48,10 +55,8 @@ export class CandidateFinder {
   find(lemma: string, upos: string, memberOf = -1): Candidate[] {
     const out: Candidate[] = []
     const lower = lemma.toLowerCase()
-    for (const i of this.byUpos.get(upos) ?? []) {
+    for (const i of this.applicable(lemma, upos)) {
       const p = this.paradigms[i]!
-      const last = p.lemma[p.lemma.length - 1]
-      if (typeof last === 'string' && !lemma.endsWith(last)) continue
       const first = p.lemma[0]
       if (typeof first === 'string' && !lemma.startsWith(first)) continue
       const stems = matchStems(p, lemma)
@@ -78,6 +83,18 @@ export class CandidateFinder {
     return out
   }
 
+  /** Paradigms of `upos` whose lemma pattern's final literal ends the lemma, in book order. */
+  private applicable(lemma: string, upos: string): number[] {
+    const groups = this.byEnding.get(upos)
+    if (!groups) return []
+    const out: number[] = []
+    for (let k = 0; k <= lemma.length; k++) {
+      const g = groups.get(lemma.slice(lemma.length - k))
+      if (g) out.push(...g)
+    }
+    return groups.size === 1 ? out : out.sort((a, b) => a - b)
+  }
+
   private sharedFeatures(
     p: Paradigm,
     { length, count, wholeMember }: { length: number; count: number; wholeMember: boolean },
@@ -89,7 +106,12 @@ export class CandidateFinder {
     const members = p.members - (self ? 1 : 0)
     const vars = stems.length - (p.openPrefix ? 1 : 0)
     const deficit = Math.min(6, 6 * vars - stemFit(stems, p.shapes))
-    const f = [`sfx:${len}`, `sfxc:${len}:${bucket}`, `size:${Math.floor(Math.log2(members + 1))}`, `fit:${deficit}`]
+    const f = [
+      `sfx:${len}`,
+      `sfxc:${len}:${bucket}`,
+      `size:${Math.floor(Math.log2(members + 1))}`,
+      `fit:${deficit}`,
+    ]
     if (wholeMember) f.push('whole')
     if (p.openPrefix) f.push(`open:${stems[0] ? 'used' : 'empty'}`)
     if (members <= 0) f.push('orphan')

@@ -3,11 +3,18 @@
 // class, a stem change from another), as in the aligned edit rules of Durrett & DeNero (2013), NAACL.
 import type { Lexicon } from '../lexicon/lexicon.ts'
 import { CandidateFinder } from './candidates.ts'
+import { sampleByClass } from './example-sample.ts'
 import { stemShapes } from './extract.ts'
-import { lemmaFeatures, type FeatureOptions } from './features.ts'
+import { type FeatureOptions, lemmaFeatures } from './features.ts'
 import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
 import { extractPattern, fillPattern } from './pattern.ts'
-import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates, trainRanker } from './ranker.ts'
+import {
+  type RankerExample,
+  type RankerOptions,
+  type RankerWeights,
+  scoreCandidates,
+  trainRanker,
+} from './ranker.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
 export interface CellRuleModel {
@@ -22,12 +29,16 @@ export interface CellRuleModel {
  * Learn one rule model per (UPOS, cell) from the lexicon's tables.
  * @example learnCellRules(lexicon, features, ranker).length // 27 for German verbs
  */
-export function learnCellRules(lex: Lexicon, features: FeatureOptions, ranker: RankerOptions): CellRuleModel[] {
+export function learnCellRules(
+  lex: Lexicon,
+  features: FeatureOptions,
+  ranker: RankerOptions,
+): CellRuleModel[] {
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
     const tables = lex.entries.filter((e) => e.upos === upos && e.cells)
     for (const key of keys) {
-      const groups = new Map<string, { rule: Paradigm; lemmas: string[]; stems: string[][] }>()
+      const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: string[][] }>()
       const own: number[] = []
       const order: string[] = []
       const items: { lemma: string; inherent: string; forms: string[] }[] = []
@@ -39,27 +50,56 @@ export function learnCellRules(lex: Lexicon, features: FeatureOptions, ranker: R
         const shape = paradigmShapeKey(upos, tp.lemma, tp.openPrefix, cells)
         let g = groups.get(shape)
         if (!g) {
-          g = { rule: { id: '', upos, lemma: tp.lemma, openPrefix: tp.openPrefix, cells, members: 0, examples: [] }, lemmas: [], stems: [] }
+          g = {
+            rule: {
+              id: '',
+              upos,
+              lemma: tp.lemma,
+              openPrefix: tp.openPrefix,
+              cells,
+              members: 0,
+              examples: [],
+            },
+            index: order.length,
+            lemmas: [],
+            stems: [],
+          }
           groups.set(shape, g)
           order.push(shape)
         }
         g.lemmas.push(e.lemma)
         g.stems.push(tp.stems)
-        own.push(order.indexOf(shape))
+        own.push(g.index)
         items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms })
       }
       const rules = order.map((s, i) => {
         const g = groups.get(s)!
-        return { ...g.rule, id: `${upos}:${key}:${i + 1}`, members: g.lemmas.length, examples: g.lemmas.slice(0, 3), shapes: stemShapes(g.stems) }
+        return {
+          ...g.rule,
+          id: `${upos}:${key}:${i + 1}`,
+          members: g.lemmas.length,
+          examples: g.lemmas.slice(0, 3),
+          shapes: stemShapes(g.stems),
+        }
       })
-      const finder = new CandidateFinder(rules, order.map((s) => groups.get(s)!.lemmas))
-      const examples: RankerExample[] = items.map((it, i) => {
+      const finder = new CandidateFinder(
+        rules,
+        order.map((s) => groups.get(s)!.lemmas),
+      )
+      const picked = sampleByClass(own, ranker.maxExamples ?? 0, ranker.seed)
+      const examples = picked.map((i): RankerExample => {
+        const it = items[i]!
         const found = finder.find(it.lemma, upos, own[i]!)
         const gold: number[] = []
         found.forEach((c, k) => {
           if (it.forms.includes(fillPattern(rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems))) gold.push(k)
         })
-        return { local: lemmaFeatures(it.lemma, it.inherent, features), candidates: found.map((c) => c.paradigm), shared: found.map((c) => c.shared), gold }
+        return {
+          local: lemmaFeatures(it.lemma, it.inherent, features),
+          candidates: found.map((c) => c.paradigm),
+          shared: found.map((c) => c.shared),
+          gold,
+        }
       })
       out.push({ upos, key, rules, weights: trainRanker(examples, ranker), finder })
     }
@@ -68,15 +108,24 @@ export function learnCellRules(lex: Lexicon, features: FeatureOptions, ranker: R
 }
 
 /** The probability of each form of one cell for a lemma, best first. */
-export function cellFormDistribution(m: CellRuleModel, lemma: string, inherent: string, features: FeatureOptions): Map<string, number> {
+export function cellFormDistribution(
+  m: CellRuleModel,
+  lemma: string,
+  inherent: string,
+  features: FeatureOptions,
+): Map<string, number> {
   const found = m.finder.find(lemma, m.upos)
   const dist = new Map<string, number>()
   if (found.length === 0) return dist
-  const probs = scoreCandidates(m.weights, lemmaFeatures(lemma, inherent, features), found.map((c) => c.paradigm), found.map((c) => c.shared))
+  const probs = scoreCandidates(
+    m.weights,
+    lemmaFeatures(lemma, inherent, features),
+    found.map((c) => c.paradigm),
+    found.map((c) => c.shared),
+  )
   found.forEach((c, i) => {
     const form = fillPattern(m.rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems)
     if (form) dist.set(form, (dist.get(form) ?? 0) + probs[i]!)
   })
   return dist
 }
-

@@ -2,11 +2,18 @@
 import type { Entry } from '../lexicon/entry.ts'
 import { buildLexicon, type Lexicon } from '../lexicon/lexicon.ts'
 import { CandidateFinder } from './candidates.ts'
-import type { CorpusEvidence } from './corpus-evidence.ts'
 import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
+import type { CorpusEvidence } from './corpus-evidence.ts'
+import { sampleByClass } from './example-sample.ts'
 import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
-import { DEFAULT_RANKER_OPTIONS, type RankerExample, type RankerOptions, type RankerWeights, trainRanker } from './ranker.ts'
+import {
+  DEFAULT_RANKER_OPTIONS,
+  type RankerExample,
+  type RankerOptions,
+  type RankerWeights,
+  trainRanker,
+} from './ranker.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
 export interface CombineOptions {
@@ -50,36 +57,51 @@ export interface InflectionModel {
  * Learn paradigms from the tables of a lexicon and train the paradigm ranker.
  * @example learnInflection(entries).book.paradigms.length // 136
  */
-export function learnInflection(entries: Iterable<Entry>, options: LearnOptions = DEFAULT_LEARN_OPTIONS): InflectionModel {
+export function learnInflection(
+  entries: Iterable<Entry>,
+  options: LearnOptions = DEFAULT_LEARN_OPTIONS,
+): InflectionModel {
   const lexicon = buildLexicon(entries)
   return learnFromLexicon(lexicon, options)
 }
 
 /** As learnInflection, from a lexicon already built. */
-export function learnFromLexicon(lexicon: Lexicon, options: LearnOptions = DEFAULT_LEARN_OPTIONS): InflectionModel {
+export function learnFromLexicon(
+  lexicon: Lexicon,
+  options: LearnOptions = DEFAULT_LEARN_OPTIONS,
+): InflectionModel {
   const book = extractParadigms(lexicon)
   const members: string[][] = book.paradigms.map(() => [])
   book.memberOf.forEach((p, i) => {
     if (p >= 0) members[p]!.push(lexicon.entries[i]!.lemma)
   })
   const finder = new CandidateFinder(book.paradigms, members)
-  const examples: RankerExample[] = []
-  lexicon.entries.forEach((e, i) => {
-    if (!e.cells) return
+  const tables = lexicon.entries.flatMap((e, i) => (e.cells ? [i] : []))
+  const picked = sampleByClass(
+    tables.map((i) => book.memberOf[i]!),
+    options.ranker.maxExamples ?? 0,
+    options.ranker.seed,
+  )
+  const examples = picked.map((t): RankerExample => {
+    const i = tables[t]!
+    const e = lexicon.entries[i]!
     const own = book.memberOf[i]!
     const found = finder.find(e.lemma, e.upos, own)
     const gold: number[] = []
     found.forEach((c, k) => {
       if (c.paradigm === own || reproduces(book.paradigms[c.paradigm]!, e)) gold.push(k)
     })
-    examples.push({
+    return {
       local: lemmaFeatures(e.lemma, e.inherent, options.features),
       candidates: found.map((c) => c.paradigm),
       shared: found.map((c) => c.shared),
       gold,
-    })
+    }
   })
   const weights = trainRanker(examples, options.ranker)
-  const cells = options.combine.cellWeight > 0 || options.combine.cellMix > 0 ? learnCellRules(lexicon, options.features, options.ranker) : []
+  const cells =
+    options.combine.cellWeight > 0 || options.combine.cellMix > 0
+      ? learnCellRules(lexicon, options.features, options.ranker)
+      : []
   return { lexicon, book, weights, finder, cells, options }
 }

@@ -21,22 +21,58 @@ export interface RankerOptions {
   rate: number
   l2: number
   seed: number
+  /** Callers train on at most this many examples (a sample stratified by class, see example-sample.ts); 0 = all. */
+  maxExamples: number
 }
 
-export const DEFAULT_RANKER_OPTIONS: RankerOptions = { epochs: 12, rate: 0.3, l2: 3e-3, seed: 1 }
+export const DEFAULT_RANKER_OPTIONS: RankerOptions = {
+  epochs: 12,
+  rate: 0.3,
+  l2: 3e-3,
+  seed: 1,
+  maxExamples: 6000,
+}
 
 /**
  * Probabilities of the candidates (softmax of their scores).
  * @example scoreCandidates(w, ['b','s1:n'], [3, 7], [['sfx:2'], ['sfx:0']]) // [0.9, 0.1]
  */
-export function scoreCandidates(w: RankerWeights, local: string[], candidates: number[], shared: string[][]): number[] {
-  const s = candidates.map((c, i) => {
-    let v = 0
-    for (const f of local) v += w.local.get(`${f}\u0000${c}`) ?? 0
-    for (const f of shared[i]!) v += w.shared.get(f) ?? 0
-    return v
-  })
+export function scoreCandidates(
+  w: RankerWeights,
+  local: string[],
+  candidates: number[],
+  shared: string[][],
+): number[] {
+  const byFeature = featureIndex(w)
+  const s = new Float64Array(candidates.length)
+  for (const f of local) {
+    const classes = byFeature.get(f)
+    if (!classes) continue
+    for (let i = 0; i < candidates.length; i++) s[i]! += classes.get(candidates[i]!) ?? 0
+  }
+  for (let i = 0; i < candidates.length; i++) for (const f of shared[i]!) s[i]! += w.shared.get(f) ?? 0
   return softmax(s)
+}
+
+const featureIndexes = new WeakMap<Map<string, number>, Map<string, Map<number, number>>>()
+
+/** `w.local` regrouped as feature → class → weight (built once per weights map, then reused). */
+function featureIndex(w: RankerWeights): Map<string, Map<number, number>> {
+  let index = featureIndexes.get(w.local)
+  if (index) return index
+  index = new Map()
+  for (const [key, v] of w.local) {
+    const cut = key.lastIndexOf('\u0000')
+    const f = key.slice(0, cut)
+    let classes = index.get(f)
+    if (!classes) {
+      classes = new Map()
+      index.set(f, classes)
+    }
+    classes.set(Number(key.slice(cut + 1)), v)
+  }
+  featureIndexes.set(w.local, index)
+  return index
 }
 
 function softmax(s: ArrayLike<number>): number[] {
@@ -53,14 +89,22 @@ function softmax(s: ArrayLike<number>): number[] {
 }
 
 interface Coded {
-  local: Int32Array
-  cand: Int32Array
+  /** Weight slot of (local feature j, candidate i) at j * candidates + i. */
+  slots: Int32Array
+  nLocal: number
   shared: Int32Array[]
   gold: Uint8Array
 }
 
-/** Train the ranker; examples are visited in a seeded shuffled order, so runs are identical. */
-export function trainRanker(examples: RankerExample[], opts: RankerOptions = DEFAULT_RANKER_OPTIONS): RankerWeights {
+/**
+ * Train the ranker; examples are visited in a seeded shuffled order, so runs are identical. Weights are kept
+ * only for the (feature, class) pairs some example can touch, so memory grows with the examples, not with
+ * features × classes.
+ */
+export function trainRanker(
+  examples: RankerExample[],
+  opts: RankerOptions = DEFAULT_RANKER_OPTIONS,
+): RankerWeights {
   const localIds = new Map<string, number>()
   const sharedIds = new Map<string, number>()
   const id = (m: Map<string, number>, k: string) => {
@@ -71,23 +115,37 @@ export function trainRanker(examples: RankerExample[], opts: RankerOptions = DEF
     }
     return v
   }
-  let nClasses = 0
+  const pairSlots = new Map<number, number>() // feature id * 2^21 + class → slot
+  const pairOf: number[] = []
   const coded: Coded[] = []
   for (const ex of examples) {
     if (ex.candidates.length < 2 || ex.gold.length === 0) continue
-    const gold = new Uint8Array(ex.candidates.length)
+    const n = ex.candidates.length
+    const gold = new Uint8Array(n)
     for (const g of ex.gold) gold[g] = 1
-    for (const c of ex.candidates) nClasses = Math.max(nClasses, c + 1)
+    const slots = new Int32Array(ex.local.length * n)
+    ex.local.forEach((f, j) => {
+      const fi = id(localIds, f)
+      for (let i = 0; i < n; i++) {
+        const pair = fi * 2097152 + ex.candidates[i]!
+        let slot = pairSlots.get(pair)
+        if (slot === undefined) {
+          slot = pairOf.length
+          pairSlots.set(pair, slot)
+          pairOf.push(pair)
+        }
+        slots[j * n + i] = slot
+      }
+    })
     coded.push({
-      local: Int32Array.from(ex.local, (f) => id(localIds, f)),
-      cand: Int32Array.from(ex.candidates),
+      slots,
+      nLocal: ex.local.length,
       shared: ex.shared.map((fs) => Int32Array.from(fs, (f) => id(sharedIds, f))),
       gold,
     })
   }
-  const nLocal = localIds.size * nClasses
-  const wl = new Float64Array(nLocal)
-  const gl = new Float64Array(nLocal)
+  const wl = new Float64Array(pairOf.length)
+  const gl = new Float64Array(pairOf.length)
   const ws = new Float64Array(sharedIds.size)
   const gs = new Float64Array(sharedIds.size)
   const rand = mulberry32(opts.seed)
@@ -100,12 +158,11 @@ export function trainRanker(examples: RankerExample[], opts: RankerOptions = DEF
     }
     for (const idx of order) {
       const ex = coded[idx]!
-      const n = ex.cand.length
+      const n = ex.gold.length
       const scores = new Float64Array(n)
       for (let i = 0; i < n; i++) {
-        const c = ex.cand[i]!
         let v = 0
-        for (const f of ex.local) v += wl[f * nClasses + c]!
+        for (let j = 0; j < ex.nLocal; j++) v += wl[ex.slots[j * n + i]!]!
         for (const f of ex.shared[i]!) v += ws[f]!
         scores[i] = v
       }
@@ -116,9 +173,8 @@ export function trainRanker(examples: RankerExample[], opts: RankerOptions = DEF
       for (let i = 0; i < n; i++) {
         const grad = p[i]! - (ex.gold[i] ? p[i]! / zg : 0)
         if (Math.abs(grad) < 1e-6) continue
-        const c = ex.cand[i]!
-        for (const f of ex.local) {
-          const k = f * nClasses + c
+        for (let j = 0; j < ex.nLocal; j++) {
+          const k = ex.slots[j * n + i]!
           const g = grad + l2 * wl[k]!
           gl[k]! += g * g
           wl[k]! -= (rate * g) / Math.sqrt(gl[k]! + 1e-8)
@@ -132,11 +188,11 @@ export function trainRanker(examples: RankerExample[], opts: RankerOptions = DEF
     }
   }
   const out: RankerWeights = { local: new Map(), shared: new Map() }
-  for (const [f, fi] of localIds) {
-    for (let c = 0; c < nClasses; c++) {
-      const v = wl[fi * nClasses + c]!
-      if (v !== 0) out.local.set(`${f}\u0000${c}`, v)
-    }
+  const names = [...localIds.keys()]
+  const bySlot = pairOf.map((_, s) => s).sort((a, b) => pairOf[a]! - pairOf[b]!) // feature order, then class
+  for (const s of bySlot) {
+    const v = wl[s]!
+    if (v !== 0) out.local.set(`${names[Math.floor(pairOf[s]! / 2097152)]}\u0000${pairOf[s]! % 2097152}`, v)
   }
   for (const [f, fi] of sharedIds) if (ws[fi] !== 0) out.shared.set(f, ws[fi]!)
   return out
