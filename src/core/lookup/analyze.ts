@@ -2,6 +2,7 @@
 import { boundCandidates, type Candidate, mergeCandidates } from './candidate.ts'
 import type { IndexedAnalysis } from './form-index.ts'
 import { DEFAULT_GUESS_OPTIONS, type GuessOptions, guessForm } from './guess.ts'
+import { guessName, nameCandidate } from './guess-name.ts'
 import type { LookupModel } from './lookup-context.ts'
 import { type LookupKey, lookupTiers, type NormalizeOptions, titleCase } from './normalize.ts'
 
@@ -16,6 +17,11 @@ export interface AnalyzeOptions extends NormalizeOptions {
    */
   guess?: boolean | 'unattested'
   guesser?: Partial<GuessOptions>
+  /**
+   * Where the token stands: `false` inside a sentence, `true` at its start; absent: unknown, treated as
+   * possibly initial. Only name guesses use it (a capital inside a sentence says more; see guess-name.ts).
+   */
+  sentenceInitial?: boolean
 }
 
 export const DEFAULT_TOP = 16
@@ -50,27 +56,42 @@ export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptio
   const top = opts.top ?? DEFAULT_TOP
   const minScore = opts.minScore ?? DEFAULT_MIN_SCORE
   const found = lookupIndex(model, form, opts)
+  const guesser = { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser }
+  const name =
+    opts.guess !== false &&
+    guesser.names &&
+    nameCandidate(model, form, opts.sentenceInitial, found?.candidates)
+      ? guessName(model, form)
+      : undefined
+  const named: Candidate[] = name ? [{ ...name, source: 'guessed', paradigm: null }] : []
   if (found && (opts.guess !== 'unattested' || found.candidates.some((c) => c.source === 'attested'))) {
-    return { form, normalized: found.how, candidates: bound(found.candidates, top, minScore) }
+    if (!name) return { form, normalized: found.how, candidates: bound(found.candidates, top, minScore) }
+    const how = [...new Set([...found.how, 'exact'])]
+    return {
+      form,
+      normalized: how,
+      candidates: boundCandidates(mergeCandidates([found.candidates, named]), top, minScore),
+    }
   }
   if (opts.guess === false) return { form, normalized: [], candidates: [] }
-  const guesser = { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser }
   const guesses = guessForm(model, lookupTiers(form, opts)[0] ?? [], minScore, guesser)
-  const how = [...new Set([...(found?.how ?? []), ...guesses.map((g) => g.how)])]
+  const how = [...new Set([...(found?.how ?? []), ...guesses.map((g) => g.how), ...(name ? ['exact'] : [])])]
+  // With a name guess beside them, the guesser's analyses share what the name leaves.
+  const rest = name ? 1 - name.score : 1
   const guessed = guesses.map(
     (g): Candidate => ({
       lemma: g.lemma,
       upos: g.upos,
       feats: g.feats,
       source: 'guessed',
-      score: g.score,
+      score: name ? Number((g.score * rest).toPrecision(4)) : g.score,
       paradigm: g.paradigm,
     }),
   )
   return {
     form,
     normalized: how,
-    candidates: boundCandidates(mergeCandidates([found?.candidates ?? [], guessed]), top, minScore),
+    candidates: boundCandidates(mergeCandidates([found?.candidates ?? [], guessed, named]), top, minScore),
   }
 }
 

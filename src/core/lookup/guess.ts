@@ -38,6 +38,11 @@ export interface GuessOptions {
   cellSmoothing: number
   /** Exponent of the forward check P(form ∈ table(lemma)) beside the rewrite prior (0: ignore it). */
   forward: number
+  /**
+   * Offer a PROPN guess (lemma = token) for a capitalized token the index lacks in that spelling, scored
+   * by the dictionary's share of names among its capitalized lemmas (guess-name.ts).
+   */
+  names: boolean
 }
 
 export const DEFAULT_GUESS_OPTIONS: GuessOptions = {
@@ -47,6 +52,7 @@ export const DEFAULT_GUESS_OPTIONS: GuessOptions = {
   listedBoost: 1_000_000,
   cellSmoothing: 0.02,
   forward: 0,
+  names: true,
 }
 
 interface QuickFit {
