@@ -24,7 +24,7 @@ export interface CorpusOptions {
 }
 
 /** Chosen on the DDN13 German dev simulation (see bench/corpus.ts). */
-export const DEFAULT_CORPUS_OPTIONS: CorpusOptions = { weight: 1.5, cap: 2, absence: 0.6 }
+export const DEFAULT_CORPUS_OPTIONS: CorpusOptions = { weight: 8, cap: 2, absence: 0.3 }
 
 /**
  * Build the evidence from form counts and the lexicon whose tables claim their forms.
@@ -62,25 +62,31 @@ export interface RerankItem {
 }
 
 /**
- * Rescore candidate tables by corpus evidence, cell by cell: in a cell where the candidates disagree, a
- * table gains for a form the corpus attests and loses a little for one it lacks (once the corpus shows the
- * lemma at all); cells where all candidates agree say nothing. Never adds a candidate. Returns the new
+ * Rescore candidate tables by corpus evidence, form by form: a table gains for each of its forms the corpus
+ * attests and loses a little for each it lacks (once the corpus shows the lemma at all). Only telling forms
+ * count — a form every candidate has says nothing — and each distinct form counts once per table, however
+ * many cells it fills (a syncretic table must not gain from the lemma's own citation form). Forms in
+ * `neutral` (already explained by other cells) count neither way. Never adds a candidate. Returns the new
  * scores (summing to 1) and each table's evidence.
  * @example rerankByCorpus(ev, [{score:.6, cells:[{key:'Pl', form:'Fenstere'}]}, {score:.4, cells:[{key:'Pl', form:'Fenstern'}]}]).scores // [0.0, 1.0]
  */
-export function rerankByCorpus(ev: CorpusEvidence, items: RerankItem[]): { scores: number[]; evidence: number[] } {
-  const byCell = new Map<string, Set<string>>()
-  for (const t of items) for (const c of t.cells) (byCell.get(c.key) ?? byCell.set(c.key, new Set()).get(c.key)!).add(c.form)
+export function rerankByCorpus(
+  ev: CorpusEvidence,
+  items: RerankItem[],
+  neutral: ReadonlySet<string> = new Set(),
+): { scores: number[]; evidence: number[] } {
+  const sets = items.map((t) => new Set(t.cells.map((c) => c.form).filter((f) => f && !neutral.has(f))))
+  const everywhere = new Set([...(sets[0] ?? [])].filter((f) => sets.every((s) => s.has(f))))
   const cache = new Map<string, number>()
   const worth = (f: string) => cache.get(f) ?? cache.set(f, formEvidence(ev, f)).get(f)!
   let seen = false
-  for (const forms of byCell.values()) for (const f of forms) if (worth(f) > 0) seen = true
-  const evidence = items.map((t) => {
+  for (const s of sets) for (const f of s) if (worth(f) > 0) seen = true
+  const evidence = sets.map((s) => {
     let e = 0
-    for (const c of t.cells) {
-      if (byCell.get(c.key)!.size < 2) continue
-      const x = worth(c.form)
-      e += x > 0 ? x : seen && !ev.claimed.has(c.form) ? -ev.absence : 0
+    for (const f of s) {
+      if (everywhere.has(f)) continue
+      const x = worth(f)
+      e += x > 0 ? x : seen && !ev.claimed.has(f) ? -ev.absence : 0
     }
     return e
   })

@@ -95,7 +95,7 @@ export function predictLemma(model: InflectionModel, lemma: string, upos: string
   const cells: ScoredCell[] = keys.map((key) => {
     const m = new Map<string, number>()
     const fromTables = byKey.get(key)
-    const own = corpusWeighted(model, dists.get(key))
+    const own = corpusWeighted(model, dists.get(key), otherForms(tables[0], key))
     const wt = own ? 1 - mix : 1
     for (const f of fromTables?.forms ?? []) m.set(f.form, (m.get(f.form) ?? 0) + wt * f.score)
     if (own) for (const [f, p] of own) m.set(f, (m.get(f) ?? 0) + (fromTables ? mix : 1) * p)
@@ -104,13 +104,26 @@ export function predictLemma(model: InflectionModel, lemma: string, upos: string
   return { tables: tables.slice(0, limit), cells }
 }
 
-/** A cell's own distribution reweighted by corpus evidence for its distinctive forms (as tables are). */
-function corpusWeighted(model: InflectionModel, d: Map<string, number> | undefined): Map<string, number> | undefined {
+/** The forms a table puts in cells other than `key` (their attestation is explained there). */
+function otherForms(table: PredictedTable | undefined, key: string): Set<string> {
+  return new Set(table?.cells.flatMap((c) => (c.key === key ? [] : c.forms)) ?? [])
+}
+
+/**
+ * A cell's own distribution reweighted by corpus evidence for its distinctive forms (as tables are); forms
+ * the best table already has in other cells are no evidence for this one.
+ */
+function corpusWeighted(
+  model: InflectionModel,
+  d: Map<string, number> | undefined,
+  neutral: ReadonlySet<string>,
+): Map<string, number> | undefined {
   if (!d || !model.corpus || d.size < 2) return d
   const forms = [...d.keys()]
   const { scores } = rerankByCorpus(
     model.corpus,
     forms.map((f) => ({ score: d.get(f)!, cells: [{ key: '', form: f }] })),
+    neutral,
   )
   return new Map(forms.map((f, i) => [f, scores[i]!]))
 }
