@@ -1,8 +1,9 @@
-// Learning cost on the npm German verb and noun tables: time to learn vs. time to only read and parse the same
+// Learning cost on the npm German verb, noun and adjective tables: time to learn vs. time to only read and parse the same
 // table rows, growth over sample fractions, and the model at the largest size (lemmas, forms, bytes, load time).
 // A seeded, evenly spread sample of the lemmas is used when all of them take too long (--lemmas N; 0 = all).
 // Every fifth sampled lemma becomes a lemma-only entry, so the model holds predicted tables too.
-// Run: npx tsx bench/scale-learn.ts -- [--lemmas 3000] [--fractions 0.1,0.3,1] [--json]
+// Run: npx tsx bench/scale-learn.ts -- [--lemmas 3000] [--fractions 0.1,0.3,1] [--save MODEL.json] [--json]
+import { writeFileSync } from 'node:fs'
 import { Readable } from 'node:stream'
 import { fileURLToPath } from 'node:url'
 import { parseArgs } from 'node:util'
@@ -26,9 +27,9 @@ export interface LearnPoint {
   loadSeconds: number
 }
 
-/** Every k-th lemma of verbs then nouns, so a sample spreads over the alphabet and both parts of speech. */
+/** Every k-th lemma of verbs, nouns then adjectives, so a sample spreads over the alphabet and all three sets. */
 function sample(limit: number): Entry[] {
-  const all = [...rowsToEntries(loadGermanNpm('verbs').rows), ...rowsToEntries(loadGermanNpm('nouns').rows)]
+  const all = (['verbs', 'nouns', 'adjectives'] as const).flatMap((set) => rowsToEntries(loadGermanNpm(set).rows))
   if (limit <= 0 || limit >= all.length) return all
   const step = all.length / limit
   return Array.from({ length: limit }, (_, i) => all[Math.floor(i * step)]!)
@@ -45,7 +46,7 @@ function tsvOf(entries: Entry[]): string {
  * Parse the rows of `entries`' first `fraction`, then learn a model from them (spread evenly; 1 in 5 as lemma-only).
  * @example (await measureLearn(sample(300), 1)).learnSeconds
  */
-export async function measureLearn(entries: Entry[], fraction: number): Promise<LearnPoint> {
+export async function measureLearn(entries: Entry[], fraction: number, save?: string): Promise<LearnPoint> {
   const count = Math.round(entries.length * fraction)
   const part = Array.from({ length: count }, (_, j) => entries[Math.floor(j / fraction)]!) // spread evenly
   const input = part.map((e, i): Entry => (i % 5 === 4 ? { lemma: e.lemma, upos: e.upos, feats: '_' } : e))
@@ -60,6 +61,7 @@ export async function measureLearn(entries: Entry[], fraction: number): Promise<
   const model = buildModel([...read.entries, ...lemmaOnly])
   const learnSeconds = (performance.now() - t) / 1000
   const encoded = encodeModel(model)
+  if (save) writeFileSync(save, encoded)
   t = performance.now()
   const decoded = decodeModel(encoded)
   const loadSeconds = (performance.now() - t) / 1000
@@ -77,11 +79,11 @@ export async function measureLearn(entries: Entry[], fraction: number): Promise<
 }
 
 /** Growth and learn/parse over the given fractions of a sample of `lemmas` German lemmas. */
-export async function measureGrowth(lemmas: number, fractions: number[]) {
+export async function measureGrowth(lemmas: number, fractions: number[], save?: string) {
   const entries = sample(lemmas)
   const points: LearnPoint[] = []
   for (const f of fractions) {
-    const p = await measureLearn(entries, f)
+    const p = await measureLearn(entries, f, f === fractions.at(-1) ? save : undefined)
     process.stderr.write(
       `learn ${(f * 100).toFixed(0)}% (${p.lemmas} lemmas, ${p.tables} tables, ${p.rows} rows): parse ${p.parseSeconds.toFixed(3)} s, learn ${p.learnSeconds.toFixed(1)} s; ${p.forms} forms, ${p.modelBytes} bytes, load ${p.loadSeconds.toFixed(2)} s\n`,
     )
@@ -104,8 +106,9 @@ if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
       lemmas: { type: 'string', default: '3000' },
       fractions: { type: 'string', default: '0.1,0.3,1' },
       json: { type: 'boolean', default: false },
+      save: { type: 'string' },
     },
   })
-  const r = await measureGrowth(Number(values.lemmas), values.fractions!.split(',').map(Number))
+  const r = await measureGrowth(Number(values.lemmas), values.fractions!.split(',').map(Number), values.save)
   if (values.json) process.stdout.write(`${JSON.stringify(r)}\n`)
 }
