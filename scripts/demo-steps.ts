@@ -3,6 +3,7 @@
 import { mkdir, readFile } from 'node:fs/promises'
 import { fileURLToPath } from 'node:url'
 import { runConstrain } from '../src/cli/constrain-run.ts'
+import { countCorpusForms } from '../src/cli/corpus-counts.ts'
 import { writeAtomic } from '../src/cli/io.ts'
 import { expandLemma } from '../src/core/inflect/expand.ts'
 import { buildModel } from '../src/core/model/build-model.ts'
@@ -37,7 +38,8 @@ export interface Learned {
 export async function learnDemoModel(): Promise<Learned> {
   const t0 = performance.now()
   await mkdir(ROOT + OUT_DIR, { recursive: true })
-  const model = buildModel(await readDemoEntries())
+  const corpus = await countCorpusForms([ROOT + CORPUS], { skipBad: false })
+  const model = buildModel(await readDemoEntries(), {}, corpus)
   const text = encodeModel(model)
   await writeAtomic(ROOT + MODEL_FILE, text)
   return { model, seconds: seconds(t0), bytes: text.length }

@@ -33,7 +33,8 @@ const entries = model.inflection.lexicon.entries
 const tables = entries.filter((e) => e.cells).length
 say(
   `  learned ${model.inflection.book.paradigms.length} paradigms from ${tables} tables and ${entries.length - tables} ` +
-    `lemma-only entries in ${seconds.toFixed(1)} s → ${MODEL_FILE} (${(bytes / 1e6).toFixed(1)} MB)`,
+    `lemma-only entries (with demo-lexicon/corpus.txt choosing their tables) in ${seconds.toFixed(1)} s → ` +
+    `${MODEL_FILE} (${(bytes / 1e6).toFixed(1)} MB)`,
 )
 
 const book = await writeDemoBook(model)

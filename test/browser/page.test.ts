@@ -92,6 +92,11 @@ describe('the page at /', () => {
     expect(look.background).toContain('repeating-linear-gradient')
     expect(look.outline).toBe('dashed')
     expect(await page.textContent('#table-results .review')).toContain('hypothesis')
+    // The demo model learned with its corpus: predicted cells say whether the text attests their form.
+    const notes = await page.locator('#table-results td.cell-predicted .corpus').allTextContents()
+    expect(notes.length).toBeGreaterThan(0)
+    for (const n of notes) expect(n).toMatch(/^(✓ seen [\d,]+× in the corpus|– not in the corpus)$/)
+    expect(notes.some((n) => n.includes('seen'))).toBe(true)
   })
 
   it('shows a paradigm with the rule of each cell and its example lemma', async () => {
