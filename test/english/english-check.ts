@@ -4,7 +4,7 @@ import { constrainCorpus } from '../../src/core/constrain/index.ts'
 import type { Entry } from '../../src/core/lexicon/entry.ts'
 import { analyzeForm } from '../../src/core/lookup/analyze.ts'
 import { lookupTiers } from '../../src/core/lookup/normalize.ts'
-import { buildModel } from '../../src/core/model/build-model.ts'
+import { buildModel, type CorpusCounts } from '../../src/core/model/build-model.ts'
 import type { Model } from '../../src/core/model/model.ts'
 import { brownSentences, brownTokens, loadBrownMapping } from '../fixtures/english/brown-corpus.ts'
 import type { EnglishDictionary } from '../fixtures/english/english-lexicon.ts'
@@ -51,22 +51,58 @@ function candidate(e: Entry, feats: string): Candidate {
 }
 
 /**
- * The model's lookup as an analyzer (attested, predicted, then guessed candidates, lookup's defaults).
- * @example modelAnalyzer(model)('taking', { sentenceInitial: false })
+ * The model's lookup as an analyzer (attested, predicted, then guessed candidates, lookup's defaults),
+ * told where the token stands (a capital inside a sentence may mark a name).
+ * @example modelAnalyzer(model)('Rhode', { sentenceInitial: false }) // […, { lemma: 'Rhode', upos: 'PROPN', … }]
  */
 export function modelAnalyzer(model: Model): Analyzer {
-  return (form) => analyzeForm(model, form).candidates
+  return (form, ctx) => analyzeForm(model, form, { sentenceInitial: ctx.sentenceInitial }).candidates
 }
 
 /**
- * Learn the model of the check: every table, the closed-class words, the lemmas.
+ * Learn the model of the check: every table, the closed-class words, the lemmas; with `corpus`, raw-text
+ * form counts that choose between a bare lemma's candidate tables (as `formfold learn --corpus`).
  * @example const model = englishModel(await englishDictionary())
  */
 export function englishModel(
   dictionary: EnglishDictionary,
   lemmas: readonly Entry[] = dictionary.lemmas,
+  corpus?: CorpusCounts,
 ): Model {
-  return buildModel([...dictionary.tables, ...dictionary.closedClass, ...lemmas])
+  return buildModel([...dictionary.tables, ...dictionary.closedClass, ...lemmas], {}, corpus)
+}
+
+/**
+ * Form counts of Brown files read as raw text (every token, its tag ignored).
+ * @example brownCounts(brownFiles()).tokens // 1,161,192: every token of Brown
+ */
+export function brownCounts(files: readonly string[]): CorpusCounts {
+  const counts = new Map<string, number>()
+  let tokens = 0
+  for (const sentence of brownSentences(files, loadBrownMapping()))
+    for (const t of sentence) {
+      counts.set(t.form, (counts.get(t.form) ?? 0) + 1)
+      tokens++
+    }
+  return { counts, tokens }
+}
+
+/**
+ * The model's predicted-only forms (no table lists them) and how many of them a corpus has.
+ * @example const { forms, attested } = predictedAttestation(model, brownCounts(files).counts)
+ */
+export function predictedAttestation(
+  model: Model,
+  counts: ReadonlyMap<string, number>,
+): { forms: number; attested: number } {
+  let forms = 0
+  let attested = 0
+  for (const form of model.index.forms()) {
+    if (model.index.get(form)?.some((a) => a.source === 'attested')) continue
+    forms++
+    if (counts.has(form)) attested++
+  }
+  return { forms, attested }
 }
 
 /**
