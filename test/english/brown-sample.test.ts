@@ -23,16 +23,17 @@ function sampleForms(): Set<string> {
 }
 
 // Measured on 2026-12-01 over the 9,927 sample tokens whose gold UPOS is not PUNCT, NUM or SYM:
-// coverage 0.8987 before (lemma strings and closed-class words) → 0.9989 after (with predicted and
-// guessed forms), recall 0.9730, ambiguity 1.783 allowed tags per covered token, single tag 0.4713.
+// coverage 0.8986 before (lemma strings and closed-class words) → 0.9989 after (with predicted and
+// guessed forms), recall 0.9848, ambiguity 1.779 allowed tags per covered token, single tag 0.4669.
+// (Before name guesses, a capitalized word the dictionary lacked was never PROPN: recall was 0.9730.)
 const MEASURED = {
   tokens: 9927,
-  coverageBefore: 0.8987,
+  coverageBefore: 0.8986,
   coverageAfter: 0.998,
   gain: 0.1,
-  recallAfter: 0.972,
-  ambiguityAfter: 1.784,
-  singleTagShare: 0.47,
+  recallAfter: 0.984,
+  ambiguityAfter: 1.78,
+  singleTagShare: 0.466,
 }
 
 describe('English constraints on a Brown sample', () => {
@@ -56,7 +57,7 @@ describe('English constraints on a Brown sample', () => {
   }, async () => {
     // Only the bare lemmas that can inflect into a sample form are listed (see lemmasForSample): learning
     // uses every table. Checked once against the whole dictionary's model on the same files: the same
-    // coverage, recall 0.9727 (here 0.9730), ambiguity 1.780 (here 1.783).
+    // coverage and recall (0.9848), ambiguity 1.784 (here 1.779).
     const model = englishModel(dictionary, lemmasForSample(dictionary.lemmas, sampleForms()))
     const { figures } = await measureEnglish(SAMPLE, dictionaryAnalyzer(dictionary), modelAnalyzer(model))
     // Measured on this sample (figures of the tree at the time, over tokens whose gold UPOS is not PUNCT,
