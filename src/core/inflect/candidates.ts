@@ -1,6 +1,8 @@
 // Candidate paradigms for a lemma: those whose lemma pattern fits it, with the shared ranking features.
+import type { Alternations, TwinOptions } from './alternations.ts'
 import { matchStems, type Paradigm, stemFit } from './paradigm.ts'
 import { SuffixIndex } from './suffix-index.ts'
+import { letterSides, paradigmSide, tiedClasses } from './twins.ts'
 
 /** One applicable paradigm for a lemma. */
 export interface Candidate {
@@ -19,10 +21,18 @@ export class CandidateFinder {
   private readonly suffixes: SuffixIndex[]
   /** Per paradigm: what its cells put before the stem, as one signature shared by paradigms alike there. */
   private readonly leftEdits: string[]
+  /** Per paradigm: the side of the learned swap its literals take (-1: none), and each letter's side. */
+  private readonly sides: number[]
+  private readonly letterSide: Map<string, Record<string, number>>
+  private readonly analogyMembers: number[]
+  /** Per paradigm: whether its mirror image is a paradigm too (a twin, or in the book). */
+  private readonly paired: boolean[]
 
   constructor(
     readonly paradigms: readonly Paradigm[],
     memberLemmas: readonly string[][],
+    alternations: Alternations = {},
+    private readonly twinOptions?: TwinOptions,
   ) {
     paradigms.forEach((p, i) => {
       const list = this.byUpos.get(p.upos) ?? []
@@ -35,6 +45,26 @@ export class CandidateFinder {
       this.byEnding.set(p.upos, groups)
     })
     this.leftEdits = paradigms.map(leftEdits)
+    this.letterSide = new Map(
+      Object.entries(alternations).map(([u, swap]) => [
+        u,
+        letterSides(
+          paradigms.filter((p) => p.upos === u),
+          swap,
+        ),
+      ]),
+    )
+    this.sides = paradigms.map((p) => {
+      const ls = this.letterSide.get(p.upos)
+      return ls ? paradigmSide(p, ls) : -1
+    })
+    const tied = tiedClasses(paradigms, alternations)
+    this.paired = paradigms.map((p, i) => p.twinOf !== undefined || tied[i] !== i)
+    paradigms.forEach((p, i) => {
+      if (p.twinOf !== undefined) this.paired[p.twinOf] = true
+      if (tied[i] !== i) this.paired[tied[i]!] = true
+    })
+    this.analogyMembers = paradigms.map((_, i) => memberLemmas[i]?.length ?? 0)
     this.suffixes = paradigms.map((_, i) => {
       const idx = new SuffixIndex()
       for (const m of memberLemmas[i] ?? []) idx.add(m.toLowerCase())
@@ -62,7 +92,8 @@ export class CandidateFinder {
       const stems = matchStems(p, lemma)
       if (!stems) continue
       const sfx = this.suffixes[i]!.longestShared(lower, memberOf === i)
-      const shared = this.sharedFeatures(p, sfx, stems, memberOf === i)
+      const shared = this.sharedFeatures(p, i, sfx, stems, memberOf === i)
+      this.sideFeatures(i, lower, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
       const left = this.leftEdits[i]!
       shared.push(`L:${left}`)
@@ -97,13 +128,15 @@ export class CandidateFinder {
 
   private sharedFeatures(
     p: Paradigm,
+    index: number,
     { length, count, wholeMember }: { length: number; count: number; wholeMember: boolean },
     stems: string[],
     self: boolean,
   ): string[] {
     const len = Math.min(length, 8)
     const bucket = count >= 10 ? 'many' : count >= 3 ? 'some' : String(count)
-    const members = p.members - (self ? 1 : 0)
+    // A twin's size is its original's (its mirrored members).
+    const members = (p.twinOf === undefined ? p.members : this.analogyMembers[index]!) - (self ? 1 : 0)
     const vars = stems.length - (p.openPrefix ? 1 : 0)
     const deficit = Math.min(6, 6 * vars - stemFit(stems, p.shapes))
     const f = [
@@ -115,7 +148,30 @@ export class CandidateFinder {
     if (wholeMember) f.push('whole')
     if (p.openPrefix) f.push(`open:${stems[0] ? 'used' : 'empty'}`)
     if (members <= 0) f.push('orphan')
+    if (p.twinOf !== undefined) f.push('twin', `twin:sfx:${len}`)
     return f
+  }
+
+  /** Whether the lemma has letters of the paradigm's side of a learned swap, and of the other side. */
+  private sideFeatures(i: number, lower: string, out: string[]): void {
+    const side = this.sides[i]!
+    const p = this.paradigms[i]!
+    const twin = p.twinOf !== undefined
+    const paired = this.paired[i]!
+    if (side < 0 || !(paired || this.twinOptions?.sides)) return
+    const letters = this.letterSide.get(p.upos)!
+    let hasOwn = 0
+    let hasOther = 0
+    for (const c of lower) {
+      const s = letters[c]
+      if (s === side) hasOwn = 1
+      else if (s !== undefined) hasOther = 1
+    }
+    const tag = `${hasOwn}${hasOther}`
+    // Within a mirror pair the lemma's letters choose the side; elsewhere they are weaker evidence.
+    const kind = paired ? 'pair' : 'solo'
+    out.push(`${kind}:hs:${tag}`, `${kind}:hs:${side}:${tag}`)
+    if (twin) out.push(`twin:hs:${tag}`)
   }
 }
 

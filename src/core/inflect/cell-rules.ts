@@ -2,6 +2,7 @@
 // Factoring a table into its cells lets a lemma combine choices seen in different tables (a prefix from one
 // class, a stem change from another), as in the aligned edit rules of Durrett & DeNero (2013), NAACL.
 import type { Lexicon } from '../lexicon/lexicon.ts'
+import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
 import { sampleByClass } from './example-sample.ts'
 import { stemShapes } from './extract.ts'
@@ -15,11 +16,13 @@ import {
   scoreCandidates,
   trainRanker,
 } from './ranker.ts'
+import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
 export interface CellRuleModel {
   upos: string
   key: string
+  /** The rules seen in tables, then their twins (see twins.ts). */
   rules: Paradigm[]
   weights: RankerWeights
   finder: CandidateFinder
@@ -33,6 +36,8 @@ export function learnCellRules(
   lex: Lexicon,
   features: FeatureOptions,
   ranker: RankerOptions,
+  alternations: Alternations = {},
+  twinOptions?: TwinOptions,
 ): CellRuleModel[] {
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
@@ -72,7 +77,7 @@ export function learnCellRules(
         own.push(g.index)
         items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms })
       }
-      const rules = order.map((s, i) => {
+      const seen = order.map((s, i) => {
         const g = groups.get(s)!
         return {
           ...g.rule,
@@ -82,26 +87,50 @@ export function learnCellRules(
           shapes: stemShapes(g.stems),
         }
       })
-      const finder = new CandidateFinder(
-        rules,
+      const twinned = withTwins(
+        seen,
         order.map((s) => groups.get(s)!.lemmas),
+        alternations,
       )
+      const rules = twinned.paradigms
+      const finder = new CandidateFinder(rules, twinned.members, alternations, twinOptions)
+      const classOf = twinOptions?.tie ? tiedClasses(rules, alternations) : undefined
       const picked = sampleByClass(own, ranker.maxExamples ?? 0, ranker.seed)
-      const examples = picked.map((i): RankerExample => {
-        const it = items[i]!
-        const found = finder.find(it.lemma, upos, own[i]!)
+      const example = (
+        it: { lemma: string; inherent: string; forms: string[] },
+        rule: number,
+      ): RankerExample => {
+        const found = finder.find(it.lemma, upos, rule)
         const gold: number[] = []
         found.forEach((c, k) => {
           if (it.forms.includes(fillPattern(rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems))) gold.push(k)
         })
         return {
           local: lemmaFeatures(it.lemma, it.inherent, features),
-          candidates: found.map((c) => c.paradigm),
+          candidates: found.map((c) => classOf?.[c.paradigm] ?? c.paradigm),
           shared: found.map((c) => c.shared),
           gold,
         }
-      })
-      out.push({ upos, key, rules, weights: trainRanker(examples, ranker), finder })
+      }
+      const examples = picked.map((i) => example(items[i]!, own[i]!))
+      const swap = alternations[upos]
+      if (swap && twinOptions?.mirrorCells) {
+        const twinOf = new Map(
+          rules.flatMap((r, i) => (r.twinOf === undefined ? [] : [[r.twinOf, i] as const])),
+        )
+        for (const i of picked) {
+          const it = items[i]!
+          const twin = twinOf.get(own[i]!)
+          const lemma = mirror(it.lemma, swap)
+          if (twin === undefined || lemma === it.lemma) continue
+          examples.push(
+            example({ lemma, inherent: it.inherent, forms: it.forms.map((f) => mirror(f, swap)) }, twin),
+          )
+        }
+      }
+      const weights = trainRanker(examples, ranker)
+      if (classOf) weights.classOf = classOf
+      out.push({ upos, key, rules, weights, finder })
     }
   }
   return out

@@ -1,6 +1,13 @@
 // Learning: lexicon → paradigm book → ranker that assigns paradigms to lemmas from their shape.
 import type { Entry } from '../lexicon/entry.ts'
-import { buildLexicon, type Lexicon } from '../lexicon/lexicon.ts'
+import { buildLexicon, type LexEntry, type Lexicon } from '../lexicon/lexicon.ts'
+import {
+  type Alternations,
+  DEFAULT_TWIN_OPTIONS,
+  learnAlternations,
+  mirror,
+  type TwinOptions,
+} from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
 import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import type { CorpusEvidence } from './corpus-evidence.ts'
@@ -14,6 +21,7 @@ import {
   type RankerWeights,
   trainRanker,
 } from './ranker.ts'
+import { tiedClasses, withTwins } from './twins.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
 export interface CombineOptions {
@@ -32,18 +40,24 @@ export interface LearnOptions {
   features: FeatureOptions
   ranker: RankerOptions
   combine: CombineOptions
+  /** Learned letter alternations and twin paradigms (absent in files written before them: off). */
+  twins?: TwinOptions
 }
 
 export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
   features: DEFAULT_FEATURE_OPTIONS,
   ranker: DEFAULT_RANKER_OPTIONS,
   combine: { cellWeight: 10, tableFloor: 0.001, cellFloor: 0.001, meanPower: 1, cellMix: 0.5 },
+  twins: DEFAULT_TWIN_OPTIONS,
 }
 
 /** What learning produces: the lexicon, its paradigm book, and the weights that choose among paradigms. */
 export interface InflectionModel {
   lexicon: Lexicon
+  /** The paradigms learned from tables, then their twins (`twinOf` set; no entry is a member of one). */
   book: ParadigmBook
+  /** Per UPOS, the letter swap learned from the book (see alternations.ts). */
+  alternations: Alternations
   weights: RankerWeights
   finder: CandidateFinder
   /** One rule ranker per (UPOS, cell). */
@@ -70,22 +84,26 @@ export function learnFromLexicon(
   lexicon: Lexicon,
   options: LearnOptions = DEFAULT_LEARN_OPTIONS,
 ): InflectionModel {
-  const book = extractParadigms(lexicon)
-  const members: string[][] = book.paradigms.map(() => [])
-  book.memberOf.forEach((p, i) => {
-    if (p >= 0) members[p]!.push(lexicon.entries[i]!.lemma)
+  const learned = extractParadigms(lexicon)
+  const alternations = learnAlternations(learned.paradigms, options.twins)
+  const own: string[][] = learned.paradigms.map(() => [])
+  learned.memberOf.forEach((p, i) => {
+    if (p >= 0) own[p]!.push(lexicon.entries[i]!.lemma)
   })
-  const finder = new CandidateFinder(book.paradigms, members)
+  const twinned = withTwins(learned.paradigms, own, alternations)
+  const book: ParadigmBook = { paradigms: twinned.paradigms, memberOf: learned.memberOf }
+  const finder = new CandidateFinder(book.paradigms, twinned.members, alternations, options.twins)
+  const classOf = options.twins?.tie ? tiedClasses(book.paradigms, alternations) : undefined
+  const twinOf = new Map(
+    book.paradigms.flatMap((p, i) => (p.twinOf === undefined ? [] : [[p.twinOf, i] as const])),
+  )
   const tables = lexicon.entries.flatMap((e, i) => (e.cells ? [i] : []))
   const picked = sampleByClass(
     tables.map((i) => book.memberOf[i]!),
     options.ranker.maxExamples ?? 0,
     options.ranker.seed,
   )
-  const examples = picked.map((t): RankerExample => {
-    const i = tables[t]!
-    const e = lexicon.entries[i]!
-    const own = book.memberOf[i]!
+  const example = (e: LexEntry, own: number): RankerExample => {
     const found = finder.find(e.lemma, e.upos, own)
     const gold: number[] = []
     found.forEach((c, k) => {
@@ -93,15 +111,38 @@ export function learnFromLexicon(
     })
     return {
       local: lemmaFeatures(e.lemma, e.inherent, options.features),
-      candidates: found.map((c) => c.paradigm),
+      candidates: found.map((c) => classOf?.[c.paradigm] ?? c.paradigm),
       shared: found.map((c) => c.shared),
       gold,
     }
-  })
+  }
+  const examples = picked.map((t) => example(lexicon.entries[tables[t]!]!, book.memberOf[tables[t]!]!))
+  // A table whose paradigm has a twin, mirrored, is what the twin's members would look like: training on
+  // these copies teaches the ranker when a twin applies (they are never entries of the model).
+  if (options.twins?.mirrorTables) {
+    for (const t of picked) {
+      const e = lexicon.entries[tables[t]!]!
+      const twin = twinOf.get(book.memberOf[tables[t]!]!)
+      const copy = twin === undefined ? null : mirrorEntry(e, alternations[e.upos]!)
+      if (copy) examples.push(example(copy, twin!))
+    }
+  }
   const weights = trainRanker(examples, options.ranker)
+  if (classOf) weights.classOf = classOf
   const cells =
     options.combine.cellWeight > 0 || options.combine.cellMix > 0
-      ? learnCellRules(lexicon, options.features, options.ranker)
+      ? learnCellRules(lexicon, options.features, options.ranker, alternations, options.twins)
       : []
-  return { lexicon, book, weights, finder, cells, options }
+  return { lexicon, book, alternations, weights, finder, cells, options }
+}
+
+/** An entry with a letter swap applied to its lemma and forms, or null when the swap leaves its lemma alone. */
+export function mirrorEntry(e: LexEntry, swap: Readonly<Record<string, string>>): LexEntry | null {
+  const lemma = mirror(e.lemma, swap)
+  if (lemma === e.lemma || !e.cells) return null
+  return {
+    ...e,
+    lemma,
+    cells: e.cells.map((c) => ({ key: c.key, forms: c.forms.map((f) => mirror(f, swap)) })),
+  }
 }

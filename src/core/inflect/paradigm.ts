@@ -23,10 +23,17 @@ export interface Paradigm {
   examples: string[]
   /** Per stem variable, what the members had there. */
   shapes?: StemShape[]
+  /** A twin (see twins.ts): the index of the paradigm it mirrors. Twins have no members of their own. */
+  twinOf?: number
 }
 
 /** The stable text identity of a paradigm's shape (cells sorted by key, variants sorted). */
-export function paradigmShapeKey(upos: string, lemma: Pattern, openPrefix: boolean, cells: ParadigmCell[]): string {
+export function paradigmShapeKey(
+  upos: string,
+  lemma: Pattern,
+  openPrefix: boolean,
+  cells: ParadigmCell[],
+): string {
   const cellPart = [...cells]
     .sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0))
     .map((c) => `${c.key}=${c.forms.map(patternKey).sort().join('\u0003')}`)
@@ -107,7 +114,10 @@ export function stemFit(stems: readonly string[], shapes: readonly StemShape[] |
 }
 
 /** The stem contents of a lemma under a paradigm (the best-fitting match), or null when it does not apply. */
-export function matchStems(p: Pick<Paradigm, 'lemma' | 'openPrefix' | 'shapes'>, lemma: string): string[] | null {
+export function matchStems(
+  p: Pick<Paradigm, 'lemma' | 'openPrefix' | 'shapes'>,
+  lemma: string,
+): string[] | null {
   const all = matchAll(p.lemma, p.openPrefix, lemma)
   if (all.length <= 1) return all[0] ?? null
   let best = all[0]!
@@ -137,5 +147,8 @@ export function applyParadigm(
 
 /** A readable description of each cell's rule, for the paradigm book. */
 export function describeParadigm(p: Paradigm): { lemma: string; cells: { feats: string; rule: string[] }[] } {
-  return { lemma: showPattern(p.lemma), cells: p.cells.map((c) => ({ feats: c.key, rule: c.forms.map(showPattern) })) }
+  return {
+    lemma: showPattern(p.lemma),
+    cells: p.cells.map((c) => ({ feats: c.key, rule: c.forms.map(showPattern) })),
+  }
 }

@@ -5,6 +5,7 @@
 /** One training item: candidate classes, their shared features, and which candidates are correct. */
 export interface RankerExample {
   local: string[]
+  /** Candidate classes as their local weights know them (see `RankerWeights.classOf`). */
   candidates: number[]
   shared: string[][]
   gold: number[]
@@ -14,6 +15,11 @@ export interface RankerExample {
 export interface RankerWeights {
   local: Map<string, number>
   shared: Map<string, number>
+  /**
+   * The class whose local weights a candidate uses, when several share them (a paradigm and its twin, see
+   * twins.ts); absent or out of range: its own. Not stored: rebuilt with the twins.
+   */
+  classOf?: readonly number[]
 }
 
 export interface RankerOptions {
@@ -45,10 +51,11 @@ export function scoreCandidates(
 ): number[] {
   const byFeature = featureIndex(w)
   const s = new Float64Array(candidates.length)
+  const cls = w.classOf ? candidates.map((c) => w.classOf![c] ?? c) : candidates
   for (const f of local) {
     const classes = byFeature.get(f)
     if (!classes) continue
-    for (let i = 0; i < candidates.length; i++) s[i]! += classes.get(candidates[i]!) ?? 0
+    for (let i = 0; i < candidates.length; i++) s[i]! += classes.get(cls[i]!) ?? 0
   }
   for (let i = 0; i < candidates.length; i++) for (const f of shared[i]!) s[i]! += w.shared.get(f) ?? 0
   return softmax(s)

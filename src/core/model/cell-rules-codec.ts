@@ -1,9 +1,11 @@
 // The per-cell rule rankers in the model file: rules, weights and each rule's member lemmas.
 import { decode, encode } from 'vlq'
+import type { Alternations, TwinOptions } from '../inflect/alternations.ts'
 import { CandidateFinder } from '../inflect/candidates.ts'
 import type { CellRuleModel } from '../inflect/cell-rules.ts'
 import { paradigmShapeKey } from '../inflect/paradigm.ts'
 import { extractPattern } from '../inflect/pattern.ts'
+import { tiedClasses, withTwins } from '../inflect/twins.ts'
 import type { LexEntry } from '../lexicon/lexicon.ts'
 import { ProblemError } from '../lexicon/problem.ts'
 import { decodeParadigm, encodeParadigm, type ParadigmJson } from './paradigm-codec.ts'
@@ -29,10 +31,10 @@ export function encodeCellRules(
   cellKeys: readonly string[],
   decimals: number,
 ): CellRulesJson {
-  const shapeOf = new Map(
-    m.rules.map((r, i) => [paradigmShapeKey(r.upos, r.lemma, r.openPrefix, r.cells), i]),
-  )
-  const members: number[][] = m.rules.map(() => [])
+  // Twin rules are not written: reading derives them again from the rules (see twins.ts).
+  const seen = m.rules.filter((r) => r.twinOf === undefined)
+  const shapeOf = new Map(seen.map((r, i) => [paradigmShapeKey(r.upos, r.lemma, r.openPrefix, r.cells), i]))
+  const members: number[][] = seen.map(() => [])
   entries.forEach((e, i) => {
     if (e.upos !== m.upos || !e.cells) return
     const cell = e.cells.find((c) => c.key === m.key)
@@ -43,7 +45,7 @@ export function encodeCellRules(
     )
     if (r !== undefined) members[r]!.push(i)
   })
-  m.rules.forEach((r, i) => {
+  seen.forEach((r, i) => {
     if (members[i]!.length !== r.members) {
       throw new Error(`cell rule ${r.id}: found ${members[i]!.length} members, the rule says ${r.members}`)
     }
@@ -61,7 +63,7 @@ export function encodeCellRules(
   return {
     upos: m.upos,
     cell: at >= 0 ? at : m.key,
-    rules: m.rules.map((r) => encodeParadigm(r, cellKeys)),
+    rules: seen.map((r) => encodeParadigm(r, cellKeys)),
     weights: encodeWeights(m.weights, decimals),
     members: encode(ints),
   }
@@ -75,14 +77,16 @@ export function decodeCellRules(
   json: CellRulesJson,
   entries: readonly LexEntry[],
   cellKeys: readonly string[],
+  alternations: Alternations = {},
+  twinOptions?: TwinOptions,
 ): CellRuleModel {
   const key = typeof json.cell === 'number' ? cellKeys[json.cell] : json.cell
   if (key === undefined)
     throw new ProblemError({ code: 'bad-model', message: `model file: no cell ${json.cell}` })
-  const rules = json.rules.map((r) => decodeParadigm(r, cellKeys))
+  const seen = json.rules.map((r) => decodeParadigm(r, cellKeys))
   const ints = decode(json.members)
   let at = 0
-  const lemmas = rules.map(() => {
+  const lemmas = seen.map(() => {
     const n = ints[at++]!
     const list: string[] = []
     let i = 0
@@ -94,11 +98,14 @@ export function decodeCellRules(
     }
     return list
   })
+  const twinned = withTwins(seen, lemmas, alternations)
+  const weights = decodeWeights(json.weights)
+  if (twinOptions?.tie) weights.classOf = tiedClasses(twinned.paradigms, alternations)
   return {
     upos: json.upos,
     key,
-    rules,
-    weights: decodeWeights(json.weights),
-    finder: new CandidateFinder(rules, lemmas),
+    rules: twinned.paradigms,
+    weights,
+    finder: new CandidateFinder(twinned.paradigms, twinned.members, alternations, twinOptions),
   }
 }

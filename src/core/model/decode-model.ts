@@ -1,6 +1,8 @@
 // Reading a model file: check format and version, rebuild the inflection model and the form index.
+import { learnAlternations } from '../inflect/alternations.ts'
 import { CandidateFinder } from '../inflect/candidates.ts'
 import type { InflectionModel } from '../inflect/learn.ts'
+import { tiedClasses, twinMembers, twinParadigms } from '../inflect/twins.ts'
 import type { LexEntry } from '../lexicon/lexicon.ts'
 import { type Problem, ProblemError } from '../lexicon/problem.ts'
 import { assembleModel } from './build-model.ts'
@@ -57,7 +59,12 @@ export function decodeModelHead(json: ModelJson): ModelHead {
   checkHeader(json)
   checkModelJson(json as unknown as Record<string, unknown>)
   const cellsOf = (u: string) => json.cellKeys[u] ?? []
-  const paradigms = json.paradigms.map((p) => decodeParadigm(p, cellsOf(p.upos)))
+  const learned = json.paradigms.map((p) => decodeParadigm(p, cellsOf(p.upos)))
+  // Twins are derived from the book exactly as learning derives them (nothing of theirs is in the file).
+  const twinOpts = json.options.learn.twins
+  const alternations = learnAlternations(learned, twinOpts)
+  const twins = twinParadigms(learned, alternations)
+  const paradigms = [...learned, ...twins]
   const entries: LexEntry[] = []
   const memberOf: number[] = []
   const kept: (KeptTable[] | null)[] = []
@@ -78,16 +85,22 @@ export function decodeModelHead(json: ModelJson): ModelHead {
     }
   }
   // The finder is rebuilt exactly as learning builds it: each paradigm's member lemmas, in entry order.
-  const members: string[][] = paradigms.map(() => [])
+  const members: string[][] = learned.map(() => [])
   memberOf.forEach((p, i) => {
     if (p >= 0) members[p]!.push(entries[i]!.lemma)
   })
+  members.push(...twinMembers(twins, members, alternations))
+  const weights = decodeWeights(json.weights)
+  if (twinOpts?.tie) weights.classOf = tiedClasses(paradigms, alternations)
   const inflection: InflectionModel = {
     lexicon: { entries, cellKeys: json.cellKeys, inflectional: json.inflectional, problems: [] },
     book: { paradigms, memberOf },
-    weights: decodeWeights(json.weights),
-    finder: new CandidateFinder(paradigms, members),
-    cells: (json.cellRules ?? []).map((c) => decodeCellRules(c, entries, cellsOf(c.upos))),
+    alternations,
+    weights,
+    finder: new CandidateFinder(paradigms, members, alternations, twinOpts),
+    cells: (json.cellRules ?? []).map((c) =>
+      decodeCellRules(c, entries, cellsOf(c.upos), alternations, twinOpts),
+    ),
     options: json.options.learn,
   }
   const corpus = decodeCorpus(json.corpus, inflection.lexicon)

@@ -67,7 +67,10 @@ export function encodeModel(model: Model): string {
     cellKeys: lexicon.cellKeys,
     inflectional: lexicon.inflectional,
     feats,
-    paradigms: book.paradigms.map((p) => encodeParadigm(p, cellsOf(p.upos))),
+    // Twins are not written: reading the file derives them again from the book (see twins.ts).
+    paradigms: book.paradigms.flatMap((p) =>
+      p.twinOf === undefined ? [encodeParadigm(p, cellsOf(p.upos))] : [],
+    ),
     weights: encodeWeights(weights, weightDecimals),
     cellRules: model.inflection.cells.map((c) =>
       encodeCellRules(c, lexicon.entries, cellsOf(c.upos), weightDecimals),
