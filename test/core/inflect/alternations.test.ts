@@ -10,6 +10,9 @@ import { predictTables } from '../../../src/core/inflect/predict.ts'
 import { twinParadigms, withTwins } from '../../../src/core/inflect/twins.ts'
 import { rowsToEntries } from '../../../src/core/lexicon/entry.ts'
 import { buildLexicon } from '../../../src/core/lexicon/lexicon.ts'
+import { buildModel } from '../../../src/core/model/build-model.ts'
+import { decodeModel } from '../../../src/core/model/decode-model.ts'
+import { encodeModel } from '../../../src/core/model/encode-model.ts'
 
 const CELLS = ['Case=Nom', 'Case=Ine', 'Case=Ela', 'Case=Ade', 'Case=Par']
 const table = (forms: string[]) =>
@@ -80,6 +83,24 @@ describe('learnAlternations (Finnish vowel harmony, from memory)', () => {
         (_, i) => model.book.paradigms[model.book.memberOf[i]!]!.twinOf === undefined,
       ),
     ).toBe(true)
+  })
+})
+
+describe('twins in the model file', () => {
+  it('are not stored, are derived again on reading, and the file is byte-identical', () => {
+    const entries = [...rowsToEntries(rows), { lemma: 'elin', upos: 'NOUN', feats: '_' }]
+    const model = buildModel(entries)
+    const text = encodeModel(model)
+    expect(JSON.parse(text).paradigms.some((p: { id: string }) => p.id.endsWith('-twin'))).toBe(false)
+    const back = decodeModel(text)
+    expect(back.inflection.book.paradigms.map((p) => p.id)).toEqual(
+      model.inflection.book.paradigms.map((p) => p.id),
+    )
+    expect(encodeModel(back)).toBe(text)
+    expect(encodeModel(buildModel(entries))).toBe(text)
+    expect(predictTables(back.inflection, 'elin', 'NOUN')).toEqual(
+      predictTables(model.inflection, 'elin', 'NOUN'),
+    )
   })
 })
 
