@@ -5,8 +5,14 @@ import type { Pattern } from './pattern.ts'
 
 /** How alternations are learned (0 paradigm pairs: off). */
 export interface TwinOptions {
-  /** A letter pair is kept when at least this many pairs of paradigms of one UPOS differ by it. */
+  /** A letter pair is kept when at least this many pairs of paradigms of one UPOS differ by it … */
   minPairs: number
+  /**
+   * … and at least this many times as many as any other pair sharing one of its letters: a true
+   * alternation (vowel harmony) pairs each letter with one partner, while stem-vowel classes that happen to
+   * mirror each other pair a vowel with several (German a/o, a/u, o/u).
+   */
+  dominance: number
   /** Rank every paradigm whose literals use swapped letters by whether the lemma has letters of its side. */
   sides: boolean
   /** Also train the table ranker on mirrored copies of the tables whose paradigm has a twin. */
@@ -18,7 +24,8 @@ export interface TwinOptions {
 }
 
 export const DEFAULT_TWIN_OPTIONS: TwinOptions = {
-  minPairs: 2,
+  minPairs: 3,
+  dominance: 2,
   sides: false,
   mirrorTables: true,
   mirrorCells: false,
@@ -70,8 +77,15 @@ export function learnAlternations(
     }
   }
   for (const [upos, m] of [...counts].sort((a, b) => (a[0] < b[0] ? -1 : 1))) {
+    const rival = (pair: string) =>
+      Math.max(0, ...[...m].filter(([q]) => q !== pair && [...q].some((ch) => pair.includes(ch))).map(([, c]) => c))
     const kept = [...m]
-      .filter(([pair, c]) => c >= opts.minPairs && (agreement.get(upos)!.get(pair) ?? 0) >= c)
+      .filter(
+        ([pair, c]) =>
+          c >= opts.minPairs &&
+          c >= (opts.dominance ?? 0) * rival(pair) &&
+          (agreement.get(upos)!.get(pair) ?? 0) >= c,
+      )
       .sort((a, b) => b[1] - a[1] || (a[0] < b[0] ? -1 : 1))
     const swap: Record<string, string> = {}
     for (const [pair] of kept) {
