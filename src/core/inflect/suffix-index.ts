@@ -1,8 +1,11 @@
 // Member suffixes per paradigm: how long a word-final string a lemma shares with the paradigm's members.
 
+/** Edges of all nodes in one map, keyed by node × CODE_SPAN + code point (a map per node costs far more). */
+const CODE_SPAN = 0x110000
+
 /** A reversed-letter trie of the member lemmas of one paradigm, with member counts per node. */
 export class SuffixIndex {
-  private readonly nodes: Map<string, number>[] = [new Map()]
+  private readonly edges = new Map<number, number>()
   private readonly counts: number[] = [0]
   private readonly ends: number[] = [0]
 
@@ -12,14 +15,13 @@ export class SuffixIndex {
     this.counts[0]!++
     const chars = [...word]
     for (let i = chars.length - 1; i >= 0; i--) {
-      const c = chars[i]!
-      let next = this.nodes[node]!.get(c)
+      const key = node * CODE_SPAN + chars[i]!.codePointAt(0)!
+      let next = this.edges.get(key)
       if (next === undefined) {
-        next = this.nodes.length
-        this.nodes.push(new Map())
+        next = this.counts.length
         this.counts.push(0)
         this.ends.push(0)
-        this.nodes[node]!.set(c, next)
+        this.edges.set(key, next)
       }
       node = next
       this.counts[node]!++
@@ -39,7 +41,7 @@ export class SuffixIndex {
     let count = this.counts[0]! - (exclude ? 1 : 0)
     let wholeMember = false
     for (let i = chars.length - 1; i >= 0; i--) {
-      const next = this.nodes[node]!.get(chars[i]!)
+      const next = this.edges.get(node * CODE_SPAN + chars[i]!.codePointAt(0)!)
       if (next === undefined) break
       const c = this.counts[next]! - (exclude ? 1 : 0)
       if (c <= 0) break
