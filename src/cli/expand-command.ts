@@ -4,8 +4,9 @@ import { type Entry, type ExpandedTable, expandLemma, ProblemError } from '../co
 import type { Model } from '../core/model/model.ts'
 import { createReadStream } from 'node:fs'
 import { formatJsonLine, formatTableRow, parseLemmaLine, streamRecords } from '../formats/index.ts'
-import { readSources, reportSkipped, runCommand } from './io.ts'
+import { reportSkipped, runCommand } from './io.ts'
 import { loadModelFile } from './model-file.ts'
+import { spoolStdin } from './spool-stdin.ts'
 
 export function registerExpand(program: Command): void {
   program
@@ -28,34 +29,49 @@ export function registerExpand(program: Command): void {
         }
         const model = await loadModelFile(opts.model)
         let wanted: Iterable<Entry> | AsyncIterable<Entry> = bareLemmas(model)
-        if (lemmas === '-') {
-          const read = await readSources([lemmas], { skipBad: Boolean(opts.skipBad), format: 'lemmas' })
-          reportSkipped(read)
-          wanted = read.entries
-        } else if (lemmas) {
-          // A file is read twice, in bounded memory: checked whole first (a bad line stops the run before any
-          // table is written), then streamed.
-          const skipBad = Boolean(opts.skipBad)
-          const check = streamRecords(createReadStream(lemmas), parseLemmaLine, { file: lemmas, skipBad })
-          let count = 0
-          for await (const _ of check) count++
-          if (count === 0) throw new ProblemError({ code: 'no-entries', file: lemmas, message: 'no lemmas to expand' })
-          const s = check.summary
-          reportSkipped({ entries: [], skipped: s.skipped, problems: s.problems, languageSpecific: [] })
-          wanted = streamRecords(createReadStream(lemmas), parseLemmaLine, { file: lemmas, skipBad: true })
-        }
-        const out = process.stdout
-        for await (const e of wanted) {
-          const table = expandLemma(model.inflection, e.lemma, e.upos, e.feats, { alternatives })
-          if (!table) {
-            process.stderr.write(`no learned paradigm of ${e.upos} applies to "${e.lemma}"\n`)
-            continue
+        // Standard input is spooled to a temporary file and read like one (bounded memory on a pipe too).
+        const spooled = lemmas === '-' ? await spoolStdin() : undefined
+        try {
+          if (lemmas) {
+            // A file is read twice, in bounded memory: checked whole first (a bad line stops the run before
+            // any table is written), then streamed.
+            const path = spooled?.path ?? lemmas
+            const file = spooled ? '<stdin>' : lemmas
+            const skipBad = Boolean(opts.skipBad)
+            const check = streamRecords(createReadStream(path), parseLemmaLine, { file, skipBad })
+            let count = 0
+            for await (const _ of check) count++
+            if (count === 0) throw new ProblemError({ code: 'no-entries', file, message: 'no lemmas to expand' })
+            const s = check.summary
+            reportSkipped({ entries: [], skipped: s.skipped, problems: s.problems, languageSpecific: [] })
+            wanted = streamRecords(createReadStream(path), parseLemmaLine, { file, skipBad: true })
           }
-          const text = opts.format === 'jsonl' ? `${formatJsonLine(table)}\n` : tableRows(table, Boolean(opts.scores))
-          if (!out.write(text)) await new Promise((r) => out.once('drain', r))
+          await writeTables(model, wanted, opts.format, Boolean(opts.scores), alternatives)
+        } finally {
+          await spooled?.done()
         }
       }),
     )
+}
+
+/** Expand each wanted lemma and write its table to stdout, waiting whenever the pipe is full. */
+async function writeTables(
+  model: Model,
+  wanted: Iterable<Entry> | AsyncIterable<Entry>,
+  format: string,
+  scores: boolean,
+  alternatives: number,
+): Promise<void> {
+  const out = process.stdout
+  for await (const e of wanted) {
+    const table = expandLemma(model.inflection, e.lemma, e.upos, e.feats, { alternatives })
+    if (!table) {
+      process.stderr.write(`no learned paradigm of ${e.upos} applies to "${e.lemma}"\n`)
+      continue
+    }
+    const text = format === 'jsonl' ? `${formatJsonLine(table)}\n` : tableRows(table, scores)
+    if (!out.write(text)) await new Promise((r) => out.once('drain', r))
+  }
 }
 
 function tableRows(t: ExpandedTable, scores: boolean): string {

@@ -142,6 +142,14 @@ describe('exit codes', () => {
     expect(r.stderr).not.toMatch(/\bat \S+ \(|node:internal/)
   })
 
+  it('expand from stdin: a bad line is named <stdin>:line and nothing is written; good input expands', async () => {
+    const bad = await w.run(['expand', '-m', 'model.json', '-'], { stdin: 'vessa\tNOUN\nkekke\tNN\n' })
+    expect({ code: bad.code, says: bad.stderr.includes('<stdin>:2'), out: bad.stdout }).toEqual({ code: 2, says: true, out: '' })
+    const good = await w.run(['expand', '-m', 'model.json', '-'], { stdin: 'vessa\tNOUN\n' })
+    expect(good.code).toBe(0)
+    expect(good.stdout.split('\n')[0]).toMatch(/^vessa\t\S+\tNOUN\t/)
+  })
+
   it('help and a good run exit 0', async () => {
     expect((await w.run(['--help'])).code).toBe(0)
     expect((await w.run(['analyze', '-m', 'model.json', 'forms.txt'])).code).toBe(0)
