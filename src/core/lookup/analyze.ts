@@ -56,7 +56,7 @@ export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptio
   const top = opts.top ?? DEFAULT_TOP
   const minScore = opts.minScore ?? DEFAULT_MIN_SCORE
   const found = lookupIndex(model, form, opts)
-  const guesser = { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser }
+  const guesser = opts.guesser ? { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser } : DEFAULT_GUESS_OPTIONS
   const name =
     opts.guess !== false &&
     guesser.names &&

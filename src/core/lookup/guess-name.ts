@@ -67,6 +67,8 @@ export function guessName(
 
 /** Does the token's first letter have case and is it upper case? ("3D" and "ß" do not.) */
 function startsWithCapital(form: string): boolean {
+  const c = form.charCodeAt(0)
+  if ((c >= 97 && c <= 122) || (c >= 48 && c <= 57)) return false // a-z, 0-9: the common case, no regex
   const first = form.match(/\p{L}/u)?.[0]
   if (first === undefined || form.indexOf(first) !== 0) return false
   return isCapitalized(first)
