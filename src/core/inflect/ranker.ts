@@ -62,11 +62,27 @@ export function scoreCandidates(
 }
 
 const featureIndexes = new WeakMap<Map<string, number>, Map<string, Map<number, number>>>()
+const featureIndexSources = new WeakMap<Map<string, number>, () => Map<string, Map<number, number>>>()
+
+/**
+ * Say how to build the feature index of a weights map without reading the map (a model file's weights are
+ * stored feature by feature, so its reader can build it directly and leave the map itself undecoded).
+ * @example provideFeatureIndex(w.local, () => new Map([['s1:e', new Map([[3, 0.5]])]]))
+ */
+export function provideFeatureIndex(local: Map<string, number>, build: () => Map<string, Map<number, number>>): void {
+  featureIndexSources.set(local, build)
+}
 
 /** `w.local` regrouped as feature → class → weight (built once per weights map, then reused). */
 function featureIndex(w: RankerWeights): Map<string, Map<number, number>> {
   let index = featureIndexes.get(w.local)
   if (index) return index
+  const source = featureIndexSources.get(w.local)
+  if (source) {
+    index = source()
+    featureIndexes.set(w.local, index)
+    return index
+  }
   index = new Map()
   for (const [key, v] of w.local) {
     const cut = key.lastIndexOf('\u0000')

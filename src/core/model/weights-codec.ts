@@ -2,7 +2,7 @@
 // Base64 VLQ is the integer encoding of Source Map Revision 3 (signed, 5 bits per character); `vlq` implements it.
 import { decode, encode } from 'vlq'
 import type { InflectionModel } from '../inflect/learn.ts'
-import type { RankerWeights } from '../inflect/ranker.ts'
+import { provideFeatureIndex, type RankerWeights } from '../inflect/ranker.ts'
 import { LazyMap } from './lazy-map.ts'
 
 /**
@@ -95,6 +95,23 @@ export function decodeWeights(json: WeightsJson): RankerWeights {
         yield [`${f}\u0000${c}`, ints[at++]! / json.scale] as const
       }
     }
+  })
+  // Ranking reads weights feature by feature: that index is built straight from the file's layout.
+  provideFeatureIndex(local, () => {
+    const ints = decode(json.local)
+    const index = new Map<string, Map<number, number>>()
+    let at = 0
+    for (const f of json.features) {
+      const n = ints[at++]!
+      const classes = new Map<number, number>()
+      let c = 0
+      for (let k = 0; k < n; k++) {
+        c += ints[at++]!
+        classes.set(c, ints[at++]! / json.scale)
+      }
+      index.set(f, classes)
+    }
+    return index
   })
   const shared = new Map<string, number>()
   for (const f of Object.keys(json.shared)) shared.set(f, json.shared[f]! / json.scale)
