@@ -42,7 +42,7 @@ export async function loadConstrainModel(path: string, lookup: AnalyzeOptions = 
       .replace(/\.model$/i, ''),
     version,
     digest: `sha256:${createHash('sha256').update(text).digest('hex').slice(0, 16)}`,
-    analyzer: (form) => analyzeForm(model, form, lookup).candidates,
+    analyzer: (form, ctx) => analyzeForm(model, form, { ...lookup, ...ctx }).candidates,
     forms: () => model.index.forms(),
   }
 }

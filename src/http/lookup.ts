@@ -99,12 +99,17 @@ export async function analyzeJson(
  */
 export async function analyzerFor(model: ServedModel, forms: Iterable<string>): Promise<Analyzer> {
   if (!(model.index instanceof ShardedFormIndex)) return analyzerOf(model)
+  // Answers for each place a token may stand (unknown, inside a sentence, first), while its shard is loaded.
   const known = new Map<string, readonly Candidate[]>()
+  const key = (form: string, initial: boolean | undefined) => `${initial === undefined ? '?' : initial ? '1' : '0'}${form}`
   for await (const { forms: step, index } of loadedSteps(model, [...forms], {})) {
     const view = { ...model, index }
-    for (const form of step) known.set(form, analyzeForm(view, form).candidates)
+    for (const form of step)
+      for (const initial of [undefined, false, true])
+        known.set(key(form, initial), analyzeForm(view, form, { sentenceInitial: initial }).candidates)
   }
-  return (form) => known.get(form) ?? analyzeForm(model, form).candidates
+  return (form, ctx) =>
+    known.get(key(form, ctx?.sentenceInitial)) ?? analyzeForm(model, form, ctx ? { ...ctx } : {}).candidates
 }
 
 /**
@@ -113,5 +118,5 @@ export async function analyzerFor(model: ServedModel, forms: Iterable<string>): 
  * @example constrainCorpus(tokens, analyzerOf(model), { level: 'upos' })
  */
 export function analyzerOf(model: ServedModel): Analyzer {
-  return (form) => analyzeForm(model, form).candidates
+  return (form, ctx) => analyzeForm(model, form, ctx ? { ...ctx } : {}).candidates
 }
