@@ -29,6 +29,13 @@ export interface RankerOptions {
   seed: number
   /** Callers train on at most this many examples (a sample stratified by class, see example-sample.ts); 0 = all. */
   maxExamples: number
+  /**
+   * Lemma-shape weights smaller than this in magnitude are dropped after training (0: none), in a ranker
+   * trained on at least `pruneFrom` examples. There most small weights are nudges from single examples, and
+   * dropping them shrinks the model and regularizes; a small lexicon needs every weight it has.
+   */
+  prune: number
+  pruneFrom: number
 }
 
 export const DEFAULT_RANKER_OPTIONS: RankerOptions = {
@@ -37,6 +44,8 @@ export const DEFAULT_RANKER_OPTIONS: RankerOptions = {
   l2: 3e-3,
   seed: 1,
   maxExamples: 6000,
+  prune: 0.2,
+  pruneFrom: 1000,
 }
 
 /**
@@ -211,11 +220,12 @@ export function trainRanker(
     }
   }
   const out: RankerWeights = { local: new Map(), shared: new Map() }
+  const prune = coded.length >= (opts.pruneFrom ?? 0) ? (opts.prune ?? 0) : 0
   const names = [...localIds.keys()]
   const bySlot = pairOf.map((_, s) => s).sort((a, b) => pairOf[a]! - pairOf[b]!) // feature order, then class
   for (const s of bySlot) {
     const v = wl[s]!
-    if (v !== 0) out.local.set(`${names[Math.floor(pairOf[s]! / 2097152)]}\u0000${pairOf[s]! % 2097152}`, v)
+    if (v !== 0 && Math.abs(v) >= prune) out.local.set(`${names[Math.floor(pairOf[s]! / 2097152)]}\u0000${pairOf[s]! % 2097152}`, v)
   }
   for (const [f, fi] of sharedIds) if (ws[fi] !== 0) out.shared.set(f, ws[fi]!)
   return out
