@@ -39,6 +39,12 @@ export interface FormAnalysis {
 
 const EXACT: readonly string[] = Object.freeze(['exact'])
 
+/** The default-bounded answer of an indexed token, keyed by the index's answer for it. */
+const answered = new WeakMap<
+  readonly IndexedAnalysis[],
+  { how: readonly string[]; candidates: readonly Candidate[] }
+>()
+
 /**
  * The first tier of an indexed token, keyed by the index's (shared, immutable) answer for it: null when
  * no other case of the token is indexed, else the merged answer. Computed once per form.
@@ -55,9 +61,24 @@ const firstTiers = new WeakMap<
 export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptions = {}): FormAnalysis {
   const top = opts.top ?? DEFAULT_TOP
   const minScore = opts.minScore ?? DEFAULT_MIN_SCORE
-  const found = lookupIndex(model, form, opts)
+  const direct = model.index.get(form)
+  // The common case, a token indexed as written: its answer depends only on the index's (shared) answer
+  // for it, so with the default bounds it is computed once and kept beside that answer.
+  if (direct && opts.guess !== 'unattested') {
+    const defaults = top === DEFAULT_TOP && minScore === DEFAULT_MIN_SCORE
+    let known = defaults ? answered.get(direct) : undefined
+    if (!known) {
+      const hit = lookupIndex(model, form, opts, direct)!
+      known = { how: hit.how, candidates: bound(hit.candidates, top, minScore) }
+      if (defaults) answered.set(direct, known)
+    }
+    return { form, normalized: known.how, candidates: known.candidates }
+  }
+  const found = lookupIndex(model, form, opts, direct)
   const guesser = opts.guesser ? { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser } : DEFAULT_GUESS_OPTIONS
+  // A token indexed in exactly this spelling is never offered a name guess (see nameCandidate).
   const name =
+    !direct &&
     opts.guess !== false &&
     guesser.names &&
     nameCandidate(model, form, opts.sentenceInitial, found?.candidates)
@@ -100,9 +121,9 @@ function lookupIndex(
   model: LookupModel,
   form: string,
   opts: NormalizeOptions,
+  direct: readonly IndexedAnalysis[] | undefined,
 ): { how: readonly string[]; candidates: readonly Candidate[] } | undefined {
   // Fast path: an indexed token is NFC already, and its first tier is itself with its lower and title case.
-  const direct = model.index.get(form)
   if (direct) {
     if (!hasCapitals(form)) return { how: EXACT, candidates: direct }
     let first = firstTiers.get(direct)

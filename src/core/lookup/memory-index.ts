@@ -127,7 +127,8 @@ interface PackedRecords {
 /** The in-memory implementation of `FormIndex`; build it with `FormIndexBuilder`. */
 export class MemoryFormIndex implements FormIndex {
   private foldMap: Map<string, string[]> | undefined
-  private readonly answers: (readonly IndexedAnalysis[] | undefined)[] = []
+  /** Answers built so far, by slot: allocated whole, so filling it in any order keeps it a packed array. */
+  private readonly answers: (readonly IndexedAnalysis[] | undefined)[]
 
   constructor(
     private readonly slots: ReadonlyMap<string, number>,
@@ -136,7 +137,9 @@ export class MemoryFormIndex implements FormIndex {
     private readonly owners: readonly IndexOwner[],
     private readonly featsTable: readonly string[],
     private readonly paradigmIds: readonly string[],
-  ) {}
+  ) {
+    this.answers = new Array(slots.size).fill(undefined)
+  }
 
   get formCount(): number {
     return this.slots.size
