@@ -48,7 +48,8 @@ export function bookFiles(lexicon: Lexicon, book: ParadigmBook): BookFiles {
   for (const upos of uposList) {
     const paradigms = book.paradigms
       .map((p, i) => ({ p, i }))
-      .filter(({ p }) => p.upos === upos)
+      // Learned paradigms only: twins (letter-alternation mirrors, never attested) are derived from these.
+      .filter(({ p }) => p.upos === upos && p.twinOf === undefined)
       .map(({ p, i }) => {
         const { lemma, cells } = describeParadigm(p)
         const example = p.examples[0]
@@ -82,7 +83,7 @@ export function bookFiles(lexicon: Lexicon, book: ParadigmBook): BookFiles {
       largest: paradigms[0]?.id,
     })
   }
-  const total = { paradigms: book.paradigms.length, tables: lexicon.entries.filter((e) => e.cells).length }
+  const total = { paradigms: book.paradigms.filter((p) => p.twinOf === undefined).length, tables: lexicon.entries.filter((e) => e.cells).length }
   files.set('index.json', `${prettyJson({ about: ABOUT, sources: BOOK_SOURCES, total, books: index })}\n`)
   return files
 }

@@ -31,8 +31,10 @@ say('formfold demo: Sulvašti, an invented language (demo-lexicon/README.md)')
 const { model, seconds, bytes } = await learnDemoModel()
 const entries = model.inflection.lexicon.entries
 const tables = entries.filter((e) => e.cells).length
+const learnedParadigms = model.inflection.book.paradigms.filter((p) => p.twinOf === undefined).length
 say(
-  `  learned ${model.inflection.book.paradigms.length} paradigms from ${tables} tables and ${entries.length - tables} ` +
+  `  learned ${learnedParadigms} paradigms (and ${model.inflection.book.paradigms.length - learnedParadigms} letter-alternation twins) ` +
+    `from ${tables} tables and ${entries.length - tables} ` +
     `lemma-only entries (with demo-lexicon/corpus.txt choosing their tables) in ${seconds.toFixed(1)} s → ` +
     `${MODEL_FILE} (${(bytes / 1e6).toFixed(1)} MB)`,
 )

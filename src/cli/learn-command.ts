@@ -24,12 +24,14 @@ export function registerLearn(program: Command): void {
         await writeAtomic(opts.output, text)
         const lex = model.inflection.lexicon
         const tables = lex.entries.filter((e) => e.cells).length
+        const learnedParadigms = model.inflection.book.paradigms.filter((p) => p.twinOf === undefined).length
+        const twins = model.inflection.book.paradigms.length - learnedParadigms
         const predicted = model.kept.filter((k) => k && k.length > 0).length
         const unfit = lex.entries.length - tables - predicted
         const forms = model.index.formCount
         const seconds = ((performance.now() - t0) / 1000).toFixed(1)
         process.stderr.write(
-          `learned ${model.inflection.book.paradigms.length} paradigms from ${tables} tables; ` +
+          `learned ${learnedParadigms} paradigms${twins > 0 ? ` (and ${twins} letter-alternation twins)` : ''} from ${tables} tables; ` +
             `${predicted} lemma-only entries got predicted tables${unfit > 0 ? ` (${unfit} fit no learned paradigm)` : ''}; ` +
             `${forms} forms indexed; ${Buffer.byteLength(text)} bytes → ${opts.output} in ${seconds} s\n`,
         )
