@@ -1,6 +1,6 @@
 // Analysis of one token: normalize, look up in the form index, guess when nothing is indexed; bound and sort.
 import { boundCandidates, type Candidate, mergeCandidates } from './candidate.ts'
-import type { IndexedAnalysis } from './form-index.ts'
+import type { FormIndex, IndexedAnalysis } from './form-index.ts'
 import { DEFAULT_GUESS_OPTIONS, type GuessOptions, guessForm } from './guess.ts'
 import { guessName, nameCandidate } from './guess-name.ts'
 import type { LookupModel } from './lookup-context.ts'
@@ -39,11 +39,24 @@ export interface FormAnalysis {
 
 const EXACT: readonly string[] = Object.freeze(['exact'])
 
-/** The default-bounded answer of an indexed token, keyed by the index's answer for it. */
-const answered = new WeakMap<
-  readonly IndexedAnalysis[],
-  { how: readonly string[]; candidates: readonly Candidate[] }
->()
+/** An indexed token's default-bounded answer. */
+type Answer = { how: readonly string[]; candidates: readonly Candidate[] }
+const answered = new WeakMap<FormIndex, Map<string, Answer>>()
+let lastIndex: FormIndex | undefined
+let lastAnswers: Map<string, Answer> | undefined
+
+/** The answers kept for an index (the last one asked for is remembered, so one model costs no lookup). */
+function answersOf(index: FormIndex): Map<string, Answer> {
+  if (index === lastIndex) return lastAnswers!
+  let answers = answered.get(index)
+  if (!answers) {
+    answers = new Map()
+    answered.set(index, answers)
+  }
+  lastIndex = index
+  lastAnswers = answers
+  return answers
+}
 
 /**
  * The first tier of an indexed token, keyed by the index's (shared, immutable) answer for it: null when
@@ -61,18 +74,18 @@ const firstTiers = new WeakMap<
 export function analyzeForm(model: LookupModel, form: string, opts: AnalyzeOptions = {}): FormAnalysis {
   const top = opts.top ?? DEFAULT_TOP
   const minScore = opts.minScore ?? DEFAULT_MIN_SCORE
+  // The common case, a token indexed as written: its answer depends only on the index's answer for it,
+  // so with the default bounds it is computed once per index and form, then found in one hash step.
+  const defaults = top === DEFAULT_TOP && minScore === DEFAULT_MIN_SCORE && opts.guess !== 'unattested'
+  const memo = defaults ? answersOf(model.index) : undefined
+  const known = memo?.get(form)
+  if (known) return { form, normalized: known.how, candidates: known.candidates }
   const direct = model.index.get(form)
-  // The common case, a token indexed as written: its answer depends only on the index's (shared) answer
-  // for it, so with the default bounds it is computed once and kept beside that answer.
   if (direct && opts.guess !== 'unattested') {
-    const defaults = top === DEFAULT_TOP && minScore === DEFAULT_MIN_SCORE
-    let known = defaults ? answered.get(direct) : undefined
-    if (!known) {
-      const hit = lookupIndex(model, form, opts, direct)!
-      known = { how: hit.how, candidates: bound(hit.candidates, top, minScore) }
-      if (defaults) answered.set(direct, known)
-    }
-    return { form, normalized: known.how, candidates: known.candidates }
+    const hit = lookupIndex(model, form, opts, direct)!
+    const answer = { how: hit.how, candidates: bound(hit.candidates, top, minScore) }
+    memo?.set(form, answer)
+    return { form, normalized: answer.how, candidates: answer.candidates }
   }
   const found = lookupIndex(model, form, opts, direct)
   const guesser = opts.guesser ? { ...DEFAULT_GUESS_OPTIONS, ...opts.guesser } : DEFAULT_GUESS_OPTIONS
