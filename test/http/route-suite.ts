@@ -133,6 +133,19 @@ export function describeRoutes(target: () => RouteTarget): void {
       expect([none.status, none.body.error.code]).toEqual([404, 'unknown-paradigm'])
     })
 
+    it('marks letter-alternation twins with the learned paradigm they mirror', async () => {
+      const list = await json(await target().fetch('/v1/paradigms'))
+      type Line = { id: string; members: number; twinOf?: string }
+      const lines: Line[] = list.body.paradigms
+      const twins = lines.filter((p) => p.twinOf !== undefined)
+      // The demo language has vowel harmony (demo-lexicon/README.md): its book gets twins.
+      expect(twins.length).toBeGreaterThan(0)
+      const ids = new Set(lines.filter((p) => p.twinOf === undefined).map((p) => p.id))
+      for (const t of twins) expect({ members: t.members, mirrors: ids.has(t.twinOf!) }).toEqual({ members: 0, mirrors: true })
+      const one = await json(await target().fetch(`/v1/paradigms/${encodeURIComponent(twins[0]!.id)}`))
+      expect(one.body.twinOf).toBe(twins[0]!.twinOf)
+    })
+
     it('expands a lemma list as JSON lines, or as TSV rows by Accept', async () => {
       const lemmas = [{ lemma: 'lokka', upos: 'NOUN' }, BARE]
       const jsonl = await target().fetch('/v1/expand', postJson({ lemmas }))

@@ -15,6 +15,10 @@ const ParadigmLine = z
     cells: z.number().int(),
     members: z.number().int(),
     examples: z.array(z.string()),
+    twinOf: z.string().optional().openapi({
+      description:
+        'only on a twin: the id of the learned paradigm it mirrors by a letter alternation (never attested, no members)',
+    }),
   })
   .openapi('ParadigmLine')
 const ParadigmRules = ParadigmLine.omit({ cells: true })
@@ -57,8 +61,13 @@ const oneRoute = createRoute({
   },
 })
 
+/** The id of the paradigm a twin mirrors, as the routes show it (absent for a learned paradigm). */
+function twinField(p: Paradigm, book: readonly Paradigm[]): { twinOf?: string } {
+  return p.twinOf === undefined ? {} : { twinOf: book[p.twinOf]?.id ?? String(p.twinOf) }
+}
+
 /** One line of the book. */
-export function paradigmLine(p: Paradigm): z.infer<typeof ParadigmLine> {
+export function paradigmLine(p: Paradigm, book: readonly Paradigm[] = []): z.infer<typeof ParadigmLine> {
   return {
     id: p.id,
     upos: p.upos,
@@ -66,6 +75,7 @@ export function paradigmLine(p: Paradigm): z.infer<typeof ParadigmLine> {
     cells: p.cells.length,
     members: p.members,
     examples: p.examples,
+    ...twinField(p, book),
   }
 }
 
@@ -77,9 +87,8 @@ export function registerParadigms(app: OpenAPIHono<AppEnv>): void {
   app.openapi(listRoute, async (c) => {
     const { model: name, upos } = c.req.valid('query')
     const { model } = await useModel(c, name)
-    const paradigms = model.inflection.book.paradigms
-      .filter((p) => !upos || p.upos === upos)
-      .map(paradigmLine)
+    const book = model.inflection.book.paradigms
+    const paradigms = book.filter((p) => !upos || p.upos === upos).map((p) => paradigmLine(p, book))
     return c.json({ paradigms }, 200)
   })
 
@@ -97,6 +106,7 @@ export function registerParadigms(app: OpenAPIHono<AppEnv>): void {
         openPrefix: p.openPrefix,
         members: p.members,
         examples: p.examples,
+        ...twinField(p, model.inflection.book.paradigms),
         cells,
       },
       200,
