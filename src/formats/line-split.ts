@@ -1,4 +1,5 @@
 // Split byte chunks or a string into raw lines at LF, bounding the memory one line may take.
+import { concatBytes } from './bytes.ts'
 
 /** A raw line: its bytes (or text, for string input), or `null` when it went past the byte cap. */
 export type RawLine<T> = T | null
@@ -59,12 +60,5 @@ export function* splitStringLines(text: string, maxChars: number): Generator<Raw
 }
 
 function join(pieces: Uint8Array[], size: number): Uint8Array {
-  if (pieces.length === 1) return pieces[0]!
-  const out = new Uint8Array(size)
-  let at = 0
-  for (const p of pieces) {
-    out.set(p, at)
-    at += p.length
-  }
-  return out
+  return pieces.length === 1 ? pieces[0]! : concatBytes(pieces, size)
 }

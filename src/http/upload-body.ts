@@ -1,4 +1,5 @@
 // An upload's body as a bounded byte stream: gzip undone (Content-Encoding), bytes counted, the start kept.
+import { concatBytes } from '../formats/bytes.ts'
 import type { Context } from 'hono'
 import { ApiError } from './api-error.ts'
 
@@ -80,16 +81,6 @@ export function openUpload(c: Context, limit: number, tooBig: () => ApiError): U
       return bytes
     },
     gzip,
-    prefix: () => concat(kept, keptBytes),
+    prefix: () => concatBytes(kept, keptBytes),
   }
-}
-
-function concat(parts: Uint8Array[], total: number): Uint8Array {
-  const out = new Uint8Array(total)
-  let at = 0
-  for (const p of parts) {
-    out.set(p, at)
-    at += p.byteLength
-  }
-  return out
 }

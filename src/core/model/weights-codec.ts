@@ -85,37 +85,32 @@ export function encodeWeights(w: RankerWeights, decimals: number): WeightsJson {
 export function decodeWeights(json: WeightsJson): RankerWeights {
   // The local weights are most of a model file: they are decoded when the ranker first needs them.
   const local = new LazyMap<string, number>(function* () {
-    const ints = decode(json.local)
-    let at = 0
-    for (const f of json.features) {
-      const n = ints[at++]!
-      let c = 0
-      for (let k = 0; k < n; k++) {
-        c += ints[at++]!
-        yield [`${f}\u0000${c}`, ints[at++]! / json.scale] as const
-      }
-    }
+    for (const [f, classes] of localByFeature(json))
+      for (const [c, w] of classes) yield [`${f}\u0000${c}`, w] as const
   })
   // Ranking reads weights feature by feature: that index is built straight from the file's layout.
-  provideFeatureIndex(local, () => {
-    const ints = decode(json.local)
-    const index = new Map<string, Map<number, number>>()
-    let at = 0
-    for (const f of json.features) {
-      const n = ints[at++]!
-      const classes = new Map<number, number>()
-      let c = 0
-      for (let k = 0; k < n; k++) {
-        c += ints[at++]!
-        classes.set(c, ints[at++]! / json.scale)
-      }
-      index.set(f, classes)
-    }
-    return index
-  })
+  provideFeatureIndex(local, () => localByFeature(json))
   const shared = new Map<string, number>()
   for (const f of Object.keys(json.shared)) shared.set(f, json.shared[f]! / json.scale)
   return { local, shared }
+}
+
+/** The local weights of a file as feature → class → weight, in the file's order (its layout, decoded). */
+function localByFeature(json: WeightsJson): Map<string, Map<number, number>> {
+  const ints = decode(json.local)
+  const index = new Map<string, Map<number, number>>()
+  let at = 0
+  for (const f of json.features) {
+    const n = ints[at++]!
+    const classes = new Map<number, number>()
+    let c = 0
+    for (let k = 0; k < n; k++) {
+      c += ints[at++]!
+      classes.set(c, ints[at++]! / json.scale)
+    }
+    index.set(f, classes)
+  }
+  return index
 }
 
 function byCodeUnit(a: string, b: string): number {

@@ -36,28 +36,10 @@ describe('learnAlternations (Finnish vowel harmony, from memory)', () => {
   const book = extractParadigms(buildLexicon(rowsToEntries(rows)))
 
   it('learns a↔ä from the two back/front paradigm pairs', () => {
-    expect(
-      learnAlternations(book.paradigms, {
-        minPairs: 2,
-        dominance: 2,
-        sides: false,
-        mirrorTables: true,
-        mirrorCells: false,
-        tie: false,
-      }),
-    ).toEqual({
+    expect(learnAlternations(book.paradigms, { ...DEFAULT_TWIN_OPTIONS, minPairs: 2 })).toEqual({
       NOUN: { a: 'ä', ä: 'a' },
     })
-    expect(
-      learnAlternations(book.paradigms, {
-        minPairs: 3,
-        dominance: 2,
-        sides: false,
-        mirrorTables: true,
-        mirrorCells: false,
-        tie: false,
-      }),
-    ).toEqual({})
+    expect(learnAlternations(book.paradigms, { ...DEFAULT_TWIN_OPTIONS, minPairs: 3 })).toEqual({})
   })
 
   it('mirrors only the paradigm that has no front counterpart, and the twin fits a front lemma', () => {
@@ -101,10 +83,14 @@ describe('learnAlternations rejects stem-vowel classes (German umlaut-like, inve
     ]
     const umlaut: Record<string, string> = { a: 'ä', o: 'ö', u: 'ü' }
     const vowelRows = ['a', 'o', 'u'].flatMap((v) =>
-      ['bl', 'kr', 'sn', 'tr'].flatMap((c, j) => mk(`${c}${v}${'dfgk'[j]}`, `${c}${umlaut[v]}${'dfgk'[j]}er`)),
+      ['bl', 'kr', 'sn', 'tr'].flatMap((c, j) =>
+        mk(`${c}${v}${'dfgk'[j]}`, `${c}${umlaut[v]}${'dfgk'[j]}er`),
+      ),
     )
     const book = extractParadigms(buildLexicon(rowsToEntries(vowelRows)))
-    expect(learnAlternations(book.paradigms, { ...DEFAULT_TWIN_OPTIONS, minPairs: 1, dominance: 0 })).not.toEqual({})
+    expect(
+      learnAlternations(book.paradigms, { ...DEFAULT_TWIN_OPTIONS, minPairs: 1, dominance: 0 }),
+    ).not.toEqual({})
     expect(learnAlternations(book.paradigms, { ...DEFAULT_TWIN_OPTIONS, minPairs: 1 })).toEqual({})
   })
 })
@@ -145,7 +131,7 @@ describe('twins (properties)', () => {
           return table([lemma, ...suffixes.map((s) => stem + k + (front ? mirror(s, swap) : s))])
         })
         const book = extractParadigms(buildLexicon(rowsToEntries(r)))
-        const opts = { minPairs: 1, dominance: 2, sides: false, mirrorTables: true, mirrorCells: false, tie: false }
+        const opts = { ...DEFAULT_TWIN_OPTIONS, minPairs: 1 }
         const alt = learnAlternations(book.paradigms, opts)
         expect(learnAlternations(book.paradigms, opts)).toEqual(alt)
         const members = book.paradigms.map((p) => p.examples)
