@@ -41,6 +41,9 @@ export function learnCellRules(
 ): CellRuleModel[] {
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
+    // Cells that split the tables alike give identical training examples (most German adjective cells
+    // do): their ranker is trained once and its weights shared.
+    const trained = new Map<string, RankerWeights>()
     const tables = lex.entries.filter((e) => e.upos === upos && e.cells)
     for (const key of keys) {
       const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: string[][] }>()
@@ -128,7 +131,13 @@ export function learnCellRules(
           )
         }
       }
-      const weights = trainRanker(examples, ranker)
+      const sameAs = JSON.stringify(examples)
+      let first = trained.get(sameAs)
+      if (!first) {
+        first = trainRanker(examples, ranker)
+        trained.set(sameAs, first)
+      }
+      const weights: RankerWeights = { local: first.local, shared: first.shared }
       if (classOf) weights.classOf = classOf
       out.push({ upos, key, rules, weights, finder })
     }

@@ -38,6 +38,24 @@ export interface RankerOptions {
    */
   prune: number
   pruneFrom: number
+  /**
+   * Which (lemma-shape feature, class) pairs get a weight: `all` every pair some example offers (the
+   * candidates' features, gold or not), `gold` only pairs seen with a correct class — the supported feature
+   * set of maximum-entropy practice (common practice). `gold` keeps far fewer weights, since most offered
+   * pairs are a wrong candidate's feature in a single example. Measured (npm German verbs, 5,000 train
+   * tables, 794 test): `all` 0.792 table / 0.9823 form with 1.33M table-ranker weights, `gold` 0.800 / 0.9805
+   * with 42k, and learning took half the time; DDN13 dev sets within a point either way.
+   */
+  support?: 'all' | 'gold'
+  /** With `gold` support, a pair offered by at least this many examples is kept too (0: never). */
+  supportMin?: number
+  /**
+   * `gold` support applies to rankers trained on at least this many examples; smaller ones keep `all`
+   * (at 1,000 npm German verb tables `gold` cost 0.4 table / 0.6 form points, at 5,000 it gained).
+   */
+  supportFrom?: number
+  /** Lemma-shape features seen in fewer examples than this get no weights (0 or 1: all do). */
+  minFeature?: number
 }
 
 export const DEFAULT_RANKER_OPTIONS: RankerOptions = {
@@ -48,6 +66,9 @@ export const DEFAULT_RANKER_OPTIONS: RankerOptions = {
   maxExamples: 6000,
   prune: 0,
   pruneFrom: 1000,
+  support: 'gold',
+  supportMin: 0,
+  supportFrom: 3000,
 }
 
 /**
@@ -151,9 +172,30 @@ export function trainRanker(
   }
   const pairSlots = new Map<number, number>() // feature id * 2^21 + class → slot
   const pairOf: number[] = []
+  const usable = examples.filter((ex) => ex.candidates.length >= 2 && ex.gold.length > 0)
+  const goldOnly = opts.support === 'gold' && usable.length >= (opts.supportFrom ?? 0)
+  const supported = goldOnly ? new Set<number>() : undefined
+  if (supported) {
+    const min = opts.supportMin ?? 0
+    const offered = new Map<number, number>()
+    for (const ex of usable)
+      for (const f of ex.local) {
+        const fi = id(localIds, f)
+        for (const g of ex.gold) supported.add(fi * 2097152 + ex.candidates[g]!)
+        if (min > 0)
+          for (const c of ex.candidates) {
+            const pair = fi * 2097152 + c
+            const k = (offered.get(pair) ?? 0) + 1
+            offered.set(pair, k)
+            if (k === min) supported.add(pair)
+          }
+      }
+  }
+  const minFeature = opts.minFeature ?? 0
+  const featureCount = new Map<string, number>()
+  if (minFeature > 1) for (const ex of usable) for (const f of ex.local) featureCount.set(f, (featureCount.get(f) ?? 0) + 1)
   const coded: Coded[] = []
-  for (const ex of examples) {
-    if (ex.candidates.length < 2 || ex.gold.length === 0) continue
+  for (const ex of usable) {
     const n = ex.candidates.length
     const gold = new Uint8Array(n)
     for (const g of ex.gold) gold[g] = 1
@@ -164,9 +206,12 @@ export function trainRanker(
         const pair = fi * 2097152 + ex.candidates[i]!
         let slot = pairSlots.get(pair)
         if (slot === undefined) {
-          slot = pairOf.length
+          if ((supported && !supported.has(pair)) || (minFeature > 1 && featureCount.get(f)! < minFeature)) slot = -1
+          else {
+            slot = pairOf.length
+            pairOf.push(pair)
+          }
           pairSlots.set(pair, slot)
-          pairOf.push(pair)
         }
         slots[j * n + i] = slot
       }
@@ -196,7 +241,10 @@ export function trainRanker(
       const scores = new Float64Array(n)
       for (let i = 0; i < n; i++) {
         let v = 0
-        for (let j = 0; j < ex.nLocal; j++) v += wl[ex.slots[j * n + i]!]!
+        for (let j = 0; j < ex.nLocal; j++) {
+          const k = ex.slots[j * n + i]!
+          if (k >= 0) v += wl[k]!
+        }
         for (const f of ex.shared[i]!) v += ws[f]!
         scores[i] = v
       }
@@ -209,6 +257,7 @@ export function trainRanker(
         if (Math.abs(grad) < 1e-6) continue
         for (let j = 0; j < ex.nLocal; j++) {
           const k = ex.slots[j * n + i]!
+          if (k < 0) continue
           const g = grad + l2 * wl[k]!
           gl[k]! += g * g
           wl[k]! -= (rate * g) / Math.sqrt(gl[k]! + 1e-8)

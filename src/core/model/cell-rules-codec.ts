@@ -9,16 +9,84 @@ import { tiedClasses, withTwins } from '../inflect/twins.ts'
 import type { LexEntry } from '../lexicon/lexicon.ts'
 import { ProblemError } from '../lexicon/problem.ts'
 import { decodeParadigm, encodeParadigm, type ParadigmJson } from './paradigm-codec.ts'
+import type { RankerWeights } from '../inflect/ranker.ts'
 import { decodeWeights, encodeWeights, type WeightsJson } from './weights-codec.ts'
 
-/** One cell's rule ranker: `members` is, per rule, its member count and the delta-coded entry indices (VLQ). */
+/**
+ * One cell's rule ranker: `members` is, per rule, its member count and the delta-coded entry indices (VLQ).
+ * Since 2.0 `weights` or `members` may be the position of an earlier cell whose weights or members are the
+ * same (cells that split the tables alike learn identical rankers: most German adjective cells do).
+ */
 export interface CellRulesJson {
   upos: string
   cell: number | string
   rules: ParadigmJson[]
-  weights: WeightsJson
-  members: string
+  weights: WeightsJson | number
+  members: string | number
 }
+
+/**
+ * Write every cell's rule ranker, each repeated weights or members list as a reference to its first cell.
+ * @example encodeAllCellRules(model.cells, entries, cellsOf, 4)[5].weights // 2 (the same as cell 2's)
+ */
+export function encodeAllCellRules(
+  cells: readonly CellRuleModel[],
+  entries: readonly LexEntry[],
+  cellsOf: (upos: string) => readonly string[],
+  decimals: number,
+  names?: ReadonlyMap<string, number>,
+): CellRulesJson[] {
+  const firstWeights = new Map<string, number>()
+  const firstMembers = new Map<string, number>()
+  return cells.map((c, i) => {
+    const json = encodeCellRules(c, entries, cellsOf(c.upos), decimals, names)
+    const w = JSON.stringify(json.weights)
+    const at = firstWeights.get(w)
+    if (at === undefined) firstWeights.set(w, i)
+    else json.weights = at
+    const m = firstMembers.get(json.members as string)
+    if (m === undefined) firstMembers.set(json.members as string, i)
+    else json.members = m
+    return json
+  })
+}
+
+/**
+ * Read every cell's rule ranker; cells that refer to an earlier cell's weights share its decoded weights.
+ * @example decodeAllCellRules(json.cellRules, entries, cellsOf).length // 27
+ */
+export function decodeAllCellRules(
+  list: readonly CellRulesJson[],
+  entries: readonly LexEntry[],
+  cellsOf: (upos: string) => readonly string[],
+  alternations: Alternations = {},
+  twinOptions?: TwinOptions,
+  featureNames?: readonly string[],
+): CellRuleModel[] {
+  const decoded: RankerWeights[] = []
+  const earlier = (v: number, i: number, what: string): CellRulesJson => {
+    const target = list[v]
+    if (!Number.isInteger(v) || v < 0 || v >= i || !target)
+      throw new ProblemError({ code: 'bad-model', message: `model file: cellRules[${i}].${what} refers to no earlier cell` })
+    return target
+  }
+  return list.map((json, i) => {
+    const members = typeof json.members === 'number' ? earlier(json.members, i, 'members').members : json.members
+    let weights = json.weights
+    let shared: RankerWeights | undefined
+    if (typeof weights === 'number') {
+      earlier(weights, i, 'weights')
+      const w = decoded[weights]!
+      shared = { local: w.local, shared: w.shared }
+      weights = EMPTY
+    }
+    const m = decodeCellRules({ ...json, members, weights }, entries, cellsOf(json.upos), alternations, twinOptions, featureNames, shared)
+    decoded.push(m.weights)
+    return m
+  })
+}
+
+const EMPTY: WeightsJson = { scale: 1, features: [], local: '', shared: {} }
 
 /**
  * Write one cell's rule ranker. A rule's members are the tables whose lemma → form rewrite in this cell
@@ -30,6 +98,7 @@ export function encodeCellRules(
   entries: readonly LexEntry[],
   cellKeys: readonly string[],
   decimals: number,
+  names?: ReadonlyMap<string, number>,
 ): CellRulesJson {
   // Twin rules are not written: reading derives them again from the rules (see twins.ts).
   const seen = m.rules.filter((r) => r.twinOf === undefined)
@@ -64,7 +133,7 @@ export function encodeCellRules(
     upos: m.upos,
     cell: at >= 0 ? at : m.key,
     rules: seen.map((r) => encodeParadigm(r, cellKeys)),
-    weights: encodeWeights(m.weights, decimals),
+    weights: encodeWeights(m.weights, decimals, names),
     members: encode(ints),
   }
 }
@@ -79,11 +148,15 @@ export function decodeCellRules(
   cellKeys: readonly string[],
   alternations: Alternations = {},
   twinOptions?: TwinOptions,
+  featureNames?: readonly string[],
+  sharedWeights?: RankerWeights,
 ): CellRuleModel {
   const key = typeof json.cell === 'number' ? cellKeys[json.cell] : json.cell
   if (key === undefined)
     throw new ProblemError({ code: 'bad-model', message: `model file: no cell ${json.cell}` })
   const seen = json.rules.map((r) => decodeParadigm(r, cellKeys))
+  if (typeof json.members !== 'string' || typeof json.weights === 'number')
+    throw new ProblemError({ code: 'bad-model', message: 'model file: a cell refers to another; read it with decodeAllCellRules' })
   const ints = decode(json.members)
   let at = 0
   const lemmas = seen.map(() => {
@@ -99,7 +172,7 @@ export function decodeCellRules(
     return list
   })
   const twinned = withTwins(seen, lemmas, alternations)
-  const weights = decodeWeights(json.weights)
+  const weights = sharedWeights ?? decodeWeights(json.weights, featureNames)
   if (twinOptions?.tie) weights.classOf = tiedClasses(twinned.paradigms, alternations)
   return {
     upos: json.upos,

@@ -41,12 +41,15 @@ export function checkModelJson(json: Record<string, unknown>): void {
     if (!v || typeof v !== 'object') throw bad(`options.learn.${g} must be an object`)
     for (const k of keys) if (!isNum(v[k])) throw bad(`options.learn.${g}.${k} must be a number`)
   }
+  if (json.featureNames !== undefined && !isStrings(json.featureNames)) throw bad('"featureNames" must be a list of strings')
   checkWeights(json.weights, 'weights')
   if (json.cellRules !== undefined) {
     if (!Array.isArray(json.cellRules)) throw bad('"cellRules" must be a list')
     json.cellRules.forEach((c: { weights?: unknown; rules?: unknown; members?: unknown }, i: number) => {
-      if (!c || typeof c !== 'object' || !Array.isArray(c.rules) || typeof c.members !== 'string') throw bad(`cellRules[${i}] is malformed`)
-      checkWeights(c.weights, `cellRules[${i}].weights`)
+      if (!c || typeof c !== 'object' || !Array.isArray(c.rules) || !(typeof c.members === 'string' || Number.isInteger(c.members)))
+        throw bad(`cellRules[${i}] is malformed`)
+      // Since 2.0 a cell may give the position of an earlier cell with the same weights.
+      if (!Number.isInteger(c.weights)) checkWeights(c.weights, `cellRules[${i}].weights`)
     })
   }
   if (!Array.isArray(json.paradigms) || !json.paradigms.every((p) => p && typeof p === 'object' && !Array.isArray(p)))
@@ -63,7 +66,7 @@ function checkWeights(w: unknown, where: string): void {
     typeof x === 'object' &&
     isNum(x.scale) &&
     (x.scale as number) > 0 &&
-    isStrings(x.features) &&
+    (isStrings(x.features) || typeof x.features === 'string') &&
     typeof x.local === 'string' &&
     !!x.shared &&
     typeof x.shared === 'object' &&

@@ -6,7 +6,7 @@ import { tiedClasses, twinMembers, twinParadigms } from '../inflect/twins.ts'
 import type { LexEntry } from '../lexicon/lexicon.ts'
 import { type Problem, ProblemError } from '../lexicon/problem.ts'
 import { assembleModel } from './build-model.ts'
-import { decodeCellRules } from './cell-rules-codec.ts'
+import { decodeAllCellRules } from './cell-rules-codec.ts'
 import { checkModelJson, smokeTestModel } from './check-model.ts'
 import { decodeCorpus } from './corpus-codec.ts'
 import { MODEL_FORMAT, MODEL_VERSION, type ModelJson } from './encode-model.ts'
@@ -90,7 +90,7 @@ export function decodeModelHead(json: ModelJson): ModelHead {
     if (p >= 0) members[p]!.push(entries[i]!.lemma)
   })
   members.push(...twinMembers(twins, members, alternations))
-  const weights = decodeWeights(json.weights)
+  const weights = decodeWeights(json.weights, json.featureNames)
   if (twinOpts?.tie) weights.classOf = tiedClasses(paradigms, alternations)
   const inflection: InflectionModel = {
     lexicon: { entries, cellKeys: json.cellKeys, inflectional: json.inflectional, problems: [] },
@@ -98,9 +98,7 @@ export function decodeModelHead(json: ModelJson): ModelHead {
     alternations,
     weights,
     finder: new CandidateFinder(paradigms, members, alternations, twinOpts),
-    cells: (json.cellRules ?? []).map((c) =>
-      decodeCellRules(c, entries, cellsOf(c.upos), alternations, twinOpts),
-    ),
+    cells: decodeAllCellRules(json.cellRules ?? [], entries, cellsOf, alternations, twinOpts, json.featureNames),
     options: json.options.learn,
   }
   const corpus = decodeCorpus(json.corpus, inflection.lexicon)

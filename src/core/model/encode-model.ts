@@ -1,15 +1,15 @@
 // Writing a model file: versioned JSON, deterministic (no clocks, fixed key order, rounded numbers), compact.
 import type { LearnOptions } from '../inflect/learn.ts'
-import { type CellRulesJson, encodeCellRules } from './cell-rules-codec.ts'
+import { type CellRulesJson, encodeAllCellRules } from './cell-rules-codec.ts'
 import { type CorpusJson, encodeCorpus } from './corpus-codec.ts'
 import type { Model } from './model.ts'
 import { encodeParadigm, type ParadigmJson } from './paradigm-codec.ts'
 import { encodeAttested, encodeKept, type TableJson } from './table-codec.ts'
-import { encodeWeights, type WeightsJson } from './weights-codec.ts'
+import { encodeWeights, featureNames, type WeightsJson } from './weights-codec.ts'
 
 export const MODEL_FORMAT = 'formfold-model'
 /** Major changes break old readers; minor ones only add what old readers may ignore. */
-export const MODEL_VERSION = '1.1'
+export const MODEL_VERSION = '2.0'
 
 /** The whole file (FORMAT.md documents every field). */
 export interface ModelJson {
@@ -28,6 +28,8 @@ export interface ModelJson {
   inflectional: Record<string, string[]>
   feats: string[]
   paradigms: ParadigmJson[]
+  /** Since 2.0: every ranker's local feature names, sorted; rankers store positions in it. */
+  featureNames: string[]
   weights: WeightsJson
   cellRules: CellRulesJson[]
   entries: [string, number, number, TableJson][]
@@ -59,6 +61,8 @@ export function encodeModel(model: Model): string {
     return [e.lemma, uposId.get(e.upos)!, f, table]
   })
   const { tablesPerLemma, tableFloor, weightDecimals, completion, completionTables, learn } = model.options
+  const names = featureNames([weights, ...model.inflection.cells.map((c) => c.weights)])
+  const nameAt = new Map(names.map((n, i) => [n, i]))
   const json: ModelJson = {
     format: MODEL_FORMAT,
     version: MODEL_VERSION,
@@ -71,10 +75,9 @@ export function encodeModel(model: Model): string {
     paradigms: book.paradigms.flatMap((p) =>
       p.twinOf === undefined ? [encodeParadigm(p, cellsOf(p.upos))] : [],
     ),
-    weights: encodeWeights(weights, weightDecimals),
-    cellRules: model.inflection.cells.map((c) =>
-      encodeCellRules(c, lexicon.entries, cellsOf(c.upos), weightDecimals),
-    ),
+    featureNames: names,
+    weights: encodeWeights(weights, weightDecimals, nameAt),
+    cellRules: encodeAllCellRules(model.inflection.cells, lexicon.entries, cellsOf, weightDecimals, nameAt),
     entries,
   }
   const corpus = encodeCorpus(model.inflection, model.corpusTokens ?? 0)

@@ -6,14 +6,39 @@ import { provideFeatureIndex, type RankerWeights } from '../inflect/ranker.ts'
 import { LazyMap } from './lazy-map.ts'
 
 /**
- * The file form. `features` sorted; `local` is, per feature in that order, the number of its classes and
- * then (class − previous class, weight × scale) pairs; `shared` feature → weight × scale.
+ * The file form. `features` sorted: the names themselves, or (since 2.0) a VLQ string of ascending
+ * positions in the model's `featureNames`, delta-coded, so rankers sharing a feature store its name once;
+ * `local` is, per feature in that order, the number of its classes and then (class − previous class,
+ * weight × scale) pairs; `shared` feature → weight × scale.
  */
 export interface WeightsJson {
   scale: number
-  features: string[]
+  features: string[] | string
   local: string
   shared: Record<string, number>
+}
+
+/**
+ * Every local feature name of some weights, sorted: the model's one list of feature names.
+ * @example featureNames([w]) // ['p1:a', 's1:e', …]
+ */
+export function featureNames(all: readonly RankerWeights[]): string[] {
+  const names = new Set<string>()
+  for (const w of all) for (const k of w.local.keys()) names.add(k.slice(0, k.lastIndexOf('\u0000')))
+  return [...names].sort(byCodeUnit)
+}
+
+/** The feature names of one ranker's file form, looked up in the model's list when stored as positions. */
+function namesOf(json: WeightsJson, names: readonly string[] | undefined): string[] {
+  if (Array.isArray(json.features)) return json.features
+  if (!names) throw new Error('weights: feature positions without the model featureNames')
+  let at = 0
+  return decode(json.features).map((d) => {
+    at += d
+    const name = names[at]
+    if (name === undefined) throw new Error(`weights: no feature name ${at}`)
+    return name
+  })
 }
 
 /**
@@ -49,7 +74,11 @@ export function roundModelWeights(m: InflectionModel, decimals: number): Inflect
  * Write rounded weights sparsely: features sorted, each feature's classes ascending and delta-coded.
  * @example encodeWeights(w, 3).local // 'EGqBC…'
  */
-export function encodeWeights(w: RankerWeights, decimals: number): WeightsJson {
+export function encodeWeights(
+  w: RankerWeights,
+  decimals: number,
+  names?: ReadonlyMap<string, number>,
+): WeightsJson {
   const scale = 10 ** decimals
   const byFeature = new Map<string, [number, number][]>()
   for (const [k, v] of w.local) {
@@ -75,32 +104,41 @@ export function encodeWeights(w: RankerWeights, decimals: number): WeightsJson {
   }
   const shared: Record<string, number> = {}
   for (const f of [...w.shared.keys()].sort(byCodeUnit)) shared[f] = Math.round(w.shared.get(f)! * scale)
-  return { scale, features, local: encode(ints), shared }
+  if (!names) return { scale, features, local: encode(ints), shared }
+  let prev = 0
+  const positions = features.map((f) => {
+    const at = names.get(f)
+    if (at === undefined) throw new Error(`weights: feature ${f} is not in the model featureNames`)
+    const d = at - prev
+    prev = at
+    return d
+  })
+  return { scale, features: encode(positions), local: encode(ints), shared }
 }
 
 /**
  * Read weights back; a weight is its integer divided by `scale`, which gives the rounded double exactly.
  * @example decodeWeights(encodeWeights(w, 3)).local.get('s2:el\u00003') // 0.152
  */
-export function decodeWeights(json: WeightsJson): RankerWeights {
+export function decodeWeights(json: WeightsJson, names?: readonly string[]): RankerWeights {
   // The local weights are most of a model file: they are decoded when the ranker first needs them.
   const local = new LazyMap<string, number>(function* () {
-    for (const [f, classes] of localByFeature(json))
+    for (const [f, classes] of localByFeature(json, names))
       for (const [c, w] of classes) yield [`${f}\u0000${c}`, w] as const
   })
   // Ranking reads weights feature by feature: that index is built straight from the file's layout.
-  provideFeatureIndex(local, () => localByFeature(json))
+  provideFeatureIndex(local, () => localByFeature(json, names))
   const shared = new Map<string, number>()
   for (const f of Object.keys(json.shared)) shared.set(f, json.shared[f]! / json.scale)
   return { local, shared }
 }
 
 /** The local weights of a file as feature → class → weight, in the file's order (its layout, decoded). */
-function localByFeature(json: WeightsJson): Map<string, Map<number, number>> {
+function localByFeature(json: WeightsJson, names?: readonly string[]): Map<string, Map<number, number>> {
   const ints = decode(json.local)
   const index = new Map<string, Map<number, number>>()
   let at = 0
-  for (const f of json.features) {
+  for (const f of namesOf(json, names)) {
     const n = ints[at++]!
     const classes = new Map<number, number>()
     let c = 0

@@ -90,18 +90,18 @@ describe('reading a model file', () => {
   const withVersion = (v: string) => text.replace(`"version":"${MODEL_VERSION}"`, `"version":"${v}"`)
 
   it('refuses a newer major version with a bad-model problem', () => {
-    const r = readModel(withVersion('2.0'))
+    const r = readModel(withVersion('3.0'))
     expect(r.ok).toBe(false)
     if (r.ok) return
     expect(r.problem.code).toBe('bad-model')
     expect(r.problem.message).toBe(
-      `model file: format version 2.0 is newer than this reader (${MODEL_VERSION}); upgrade formfold to read it`,
+      `model file: format version 3.0 is newer than this reader (${MODEL_VERSION}); upgrade formfold to read it`,
     )
-    expect(() => decodeModel(withVersion('2.0'))).toThrow(/newer than this reader/)
+    expect(() => decodeModel(withVersion('3.0'))).toThrow(/newer than this reader/)
   })
 
   it('reads a newer minor version of the same major', () => {
-    expect(readModel(withVersion('1.7')).ok).toBe(true)
+    expect(readModel(withVersion('2.7')).ok).toBe(true)
   })
 
   it.each([
