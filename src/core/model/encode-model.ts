@@ -57,7 +57,7 @@ export function encodeModel(model: Model): string {
     }
     const table = e.cells
       ? encodeAttested(e, book.memberOf[i] ?? -1, book.paradigms, cellsOf(e.upos))
-      : encodeKept(model.kept[i] ?? [], cellsOf(e.upos))
+      : encodeKept(model.kept[i] ?? [], cellsOf(e.upos), e.lemma, book.paradigms)
     return [e.lemma, uposId.get(e.upos)!, f, table]
   })
   const { tablesPerLemma, tableFloor, weightDecimals, completion, completionTables, learn } = model.options

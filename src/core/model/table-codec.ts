@@ -13,14 +13,20 @@ export type RawCells = [CellRef, ...string[]][]
 /**
  * The table slot of an entry record (see FORMAT.md): `p` (paradigm p applied to the lemma gives the table),
  * `{p, s}` (paradigm p with these stems), `{p, f}` (raw cells; p = its paradigm or -1), or for a bare lemma
- * the array of kept tables `[p, score×10⁴]` / `[p, score×10⁴, rawCells]`, with a trailing 1 for a table
- * that only completes the cells of forms the others license.
+ * the array of kept tables `[p, score×10⁴]` / `[p, score×10⁴, rawCells]` / `[p, score×10⁴, {d: rawCells}]`
+ * (only the cells that differ from paradigm p's table of the lemma), with a trailing 1 for a table that
+ * only completes the cells of forms the others license.
  */
 export type TableJson =
   | number
   | { p: number; s: string[] }
   | { p: number; f: RawCells }
-  | [number, number, ...(RawCells | 1)[]][]
+  | [number, number, ...(RawCells | Differing | 1)[]][]
+
+/** Since 2.0: a kept table as the cells where it differs from its paradigm's table of the lemma. */
+interface Differing {
+  d: RawCells
+}
 
 /** Encode the table of an attested entry, the most compact way that reproduces it exactly. */
 export function encodeAttested(
@@ -49,14 +55,34 @@ export function encodeAttested(
   return { p: par ? p : -1, f: encodeCells(cells, cellKeys) }
 }
 
-/** Encode the kept tables of a bare lemma. */
-export function encodeKept(kept: readonly KeptTable[], cellKeys: readonly string[]): TableJson {
+/**
+ * Encode the kept tables of a bare lemma. A table mixed from cell predictions is written as the cells where
+ * it differs from its paradigm's table of the lemma, when both have the same cells in the same order.
+ * @example encodeKept([{ paradigm: 3, score: 0.9, cells: null }], keys, 'Rose', paradigms) // [[3, 9000]]
+ */
+export function encodeKept(
+  kept: readonly KeptTable[],
+  cellKeys: readonly string[],
+  lemma = '',
+  paradigms: readonly Paradigm[] = [],
+): TableJson {
   return kept.map((t) => {
-    const out: [number, number, ...(RawCells | 1)[]] = [t.paradigm, Math.round(t.score * 1e4)]
-    if (t.cells) out.push(encodeCells(t.cells, cellKeys))
+    const out: [number, number, ...(RawCells | Differing | 1)[]] = [t.paradigm, Math.round(t.score * 1e4)]
+    if (t.cells) {
+      const base = baseCells(lemma, paradigms[t.paradigm])
+      const alike = base?.length === t.cells.length && base.every((c, i) => c.key === t.cells![i]!.key)
+      if (alike) out.push({ d: encodeCells(t.cells.filter((c, i) => !sameCells([c], [base[i]!])), cellKeys) })
+      else out.push(encodeCells(t.cells, cellKeys))
+    }
     if (t.completes) out.push(1)
     return out
   })
+}
+
+/** Paradigm p's table of the lemma (null when it does not apply). */
+function baseCells(lemma: string, par: Paradigm | undefined): Cell[] | null {
+  const forms = par && applyParadigm(par, lemma)
+  return par && forms ? par.cells.map((c, i) => ({ key: c.key, forms: forms[i]! })) : null
 }
 
 function encodeCells(cells: readonly Cell[], cellKeys: readonly string[]): RawCells {
@@ -81,11 +107,15 @@ export function decodeTable(
       kept: t.map((k) => {
         if (!paradigms[k[0]]) throw bad(`${lemma}: no paradigm ${k[0]}`)
         const raw = k.find((x): x is RawCells => Array.isArray(x))
-        const table: KeptTable = {
-          paradigm: k[0],
-          score: k[1] / 1e4,
-          cells: raw ? decodeCells(raw, cellKeys) : null,
+        const diff = k.find((x): x is Differing => typeof x === 'object' && !Array.isArray(x))
+        let cells = raw ? decodeCells(raw, cellKeys) : null
+        if (diff) {
+          const base = baseCells(lemma, paradigms[k[0]])
+          if (!base || !Array.isArray(diff.d)) throw bad(`${lemma}: paradigm ${k[0]} does not apply`)
+          const changed = new Map(decodeCells(diff.d, cellKeys).map((c) => [c.key, c]))
+          cells = base.map((c) => changed.get(c.key) ?? c)
         }
+        const table: KeptTable = { paradigm: k[0], score: k[1] / 1e4, cells }
         if (k.slice(2).includes(1)) table.completes = true
         return table
       }),

@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest'
 import { predictTables } from '../../../src/core/inflect/predict.ts'
 import { decodeModel, readModel } from '../../../src/core/model/decode-model.ts'
 import { encodeModel } from '../../../src/core/model/encode-model.ts'
+import { DEMO_MODEL_TEXT } from '../../../src/http/demo-model.generated.ts'
 import { germanModel } from '../lookup/fixtures/german.ts'
 
 describe('shared parts of the model file', () => {
@@ -39,6 +40,26 @@ describe('shared parts of the model file', () => {
       expect(predictTables(back.inflection, lemma, upos, '_', 4)).toEqual(
         predictTables(model.inflection, lemma, upos, '_', 4),
       )
+  })
+
+  it('writes a mixed predicted table as the cells where it differs from its paradigm, and reads it back', () => {
+    // The embedded demo model (the invented language of demo-lexicon/) has such tables; the German
+    // fixture has none.
+    const demo = decodeModel(DEMO_MODEL_TEXT)
+    const demoJson = JSON.parse(DEMO_MODEL_TEXT)
+    const mixed = demo.kept.flatMap((k, i) => (k?.some((t) => t.cells) ? [i] : []))
+    expect(mixed.length).toBeGreaterThan(10)
+    let written = 0
+    for (const i of mixed) {
+      const slot = demoJson.entries[i][3] as unknown[][]
+      const diffs = slot.flatMap((t) => t.filter((x) => x && typeof x === 'object' && 'd' in x)) as { d: unknown[] }[]
+      const cells = demo.kept[i]!.find((t) => t.cells)!.cells!
+      // Only the differing cells are written: fewer than the table has.
+      for (const d of diffs) expect(d.d.length).toBeLessThan(cells.length)
+      written += diffs.length
+    }
+    expect(written).toBeGreaterThan(10)
+    expect(encodeModel(demo)).toBe(DEMO_MODEL_TEXT)
   })
 
   it('refuses a reference to a cell that is not earlier', () => {
