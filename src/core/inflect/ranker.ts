@@ -31,10 +31,12 @@ export interface RankerOptions {
   maxExamples: number
   /**
    * Lemma-shape weights smaller than this in magnitude are dropped after training (0: none), in a ranker
-   * trained on at least `pruneFrom` examples. There most small weights are nudges from single examples, and
-   * dropping them shrinks the model and regularizes; a small lexicon needs every weight it has. Off by
-   * default: 0.2 was +0.5/+1.0 table points on DDN13 German dev but -1.0/-0.5 on test, i.e. within noise
-   * for accuracy; it halves the weights, so use it where size matters.
+   * trained on at least `pruneFrom` examples: there most small weights are nudges from single examples, and
+   * dropping them shrinks the model and regularizes; a small lexicon needs every weight it has. Measured on
+   * npm German verbs and nouns (5,000 train tables each, with supported features): 0.06 gave 0.802 / 0.9828
+   * and 0.959 / 0.9821 (table / form) against 0.800 / 0.9819 and 0.959 / 0.9825 without, 38% fewer cell
+   * weights; 0.12 gave 0.799 / 0.9826 and 0.958 / 0.9815. (0.2 from 1,000 examples moved the DDN13 German
+   * figures within noise, −1 to −7 points on Finnish and Spanish dev at larger values.)
    */
   prune: number
   pruneFrom: number
@@ -64,8 +66,8 @@ export const DEFAULT_RANKER_OPTIONS: RankerOptions = {
   l2: 3e-3,
   seed: 1,
   maxExamples: 6000,
-  prune: 0,
-  pruneFrom: 1000,
+  prune: 0.06,
+  pruneFrom: 3000,
   support: 'gold',
   supportMin: 0,
   supportFrom: 3000,
