@@ -9,6 +9,7 @@ import { stemShapes } from './extract.ts'
 import { type FeatureOptions, lemmaFeatures } from './features.ts'
 import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
 import { extractPattern, fillPattern } from './pattern.ts'
+import { withPrior } from './prior.ts'
 import {
   type RankerExample,
   type RankerOptions,
@@ -38,6 +39,7 @@ export function learnCellRules(
   ranker: RankerOptions,
   alternations: Alternations = {},
   twinOptions?: TwinOptions,
+  prior?: number,
 ): CellRuleModel[] {
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
@@ -128,7 +130,7 @@ export function learnCellRules(
           )
         }
       }
-      const weights = trainRanker(examples, ranker)
+      const weights = trainRanker(examples, withPrior(ranker, examples.length, prior))
       if (classOf) weights.classOf = classOf
       out.push({ upos, key, rules, weights, finder })
     }
