@@ -93,6 +93,24 @@ export class CandidateFinder {
     })
   }
 
+  /**
+   * Whether a lemma's harmony letters (harmony.ts) are all on one side: a mirrored training copy that is not
+   * (a swap that changes a-ä but leaves u) would teach the harmony features the opposite of the rule.
+   * @example finder.oneSide('käivättu', 'NOUN') // false when u is a back letter
+   */
+  oneSide(lemma: string, upos: string): boolean {
+    const letters = this.harmony.get(upos)
+    if (!letters) return true
+    let seen = -1
+    for (const c of lemma.toLowerCase()) {
+      const s = letters[c]
+      if (s === undefined) continue
+      if (seen >= 0 && s !== seen) return false
+      seen = s
+    }
+    return true
+  }
+
   /** UPOS tags that have paradigms. */
   uposTags(): string[] {
     return [...this.byUpos.keys()]

@@ -131,7 +131,9 @@ export function learnFromLexicon(
       const e = lexicon.entries[tables[t]!]!
       const twin = twinOf.get(book.memberOf[tables[t]!]!)
       const copy = twin === undefined ? null : mirrorEntry(e, alternations[e.upos]!)
-      if (copy) examples.push(example(copy, twin!))
+      // A copy whose harmony letters the swap left on both sides would contradict the harmony features.
+      const consistent = copy && (!options.twins.harmony || finder.oneSide(copy.lemma, copy.upos))
+      if (consistent) examples.push(example(copy, twin!))
     }
   }
   const weights = trainRanker(examples, withPrior(options.ranker, examples.length, options.prior))

@@ -61,4 +61,12 @@ describe('CandidateFinder leave-one-out with twins (Finnish, from memory)', () =
     expect(sfx(asTraining, home)).toBe(2) // what is left: puhelin shares -in
     expect(sfx(asTraining, twin)).toBe(0)
   })
+
+  it('tells a lemma whose harmony letters are all on one side from a mixed one', () => {
+    expect(finder.oneSide('äväin', 'NOUN')).toBe(true)
+    expect(finder.oneSide('puhelin', 'NOUN')).toBe(true)
+    expect(finder.oneSide('käivättä', 'NOUN')).toBe(true)
+    expect(finder.oneSide('kaivättu', 'NOUN')).toBe(false)
+    expect(finder.oneSide('kaivättu', 'VERB')).toBe(true) // no swap learned for verbs
+  })
 })
