@@ -126,6 +126,8 @@ export class CandidateFinder {
     const out: Candidate[] = []
     const lower = lemma.toLowerCase()
     const skip = this.leftOut(lower, upos, memberOf)
+    const letters = this.harmony.get(upos)
+    const cls = letters ? harmonyClass(lower, letters) : -1
     for (const i of this.applicable(lemma, upos)) {
       const p = this.paradigms[i]!
       const first = p.lemma[0]
@@ -135,7 +137,7 @@ export class CandidateFinder {
       const excluded = skip.get(i)
       const sfx = this.suffixes[i]!.longestShared(lower, excluded === lower ? true : (excluded ?? false))
       const shared = this.sharedFeatures(p, i, sfx, stems, excluded !== undefined)
-      this.sideFeatures(i, lower, shared)
+      this.sideFeatures(i, lower, cls, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
       const left = this.leftEdits[i]!
       shared.push(`L:${left}`)
@@ -212,14 +214,13 @@ export class CandidateFinder {
   }
 
   /** Whether the lemma has letters of the paradigm's side of a learned swap, and of the other side. */
-  private sideFeatures(i: number, lower: string, out: string[]): void {
+  private sideFeatures(i: number, lower: string, cls: number, out: string[]): void {
     const side = this.sides[i]!
     const p = this.paradigms[i]!
     const twin = p.twinOf !== undefined
     const paired = this.paired[i]!
     if (side >= 0 && this.twinOptions?.harmony) {
       // The lemma's class against the paradigm's side, shared and per paradigm (neutral words: learned).
-      const cls = harmonyClass(lower, this.harmony.get(p.upos)!)
       out.push(`hv:${side}:${cls}`, `hv:${cls}|${i}`)
     }
     if (side < 0 || !(paired || this.twinOptions?.sides)) return
