@@ -21,6 +21,8 @@ export interface TwinOptions {
   mirrorCells: boolean
   /** A paradigm and its mirror image share their lemma-shape weights (see `tiedClasses`). */
   tie: boolean
+  /** Rank paradigms using swapped letters by the lemma's harmony class (harmony.ts; absent: off). */
+  harmony?: boolean
 }
 
 export const DEFAULT_TWIN_OPTIONS: TwinOptions = {
@@ -30,6 +32,7 @@ export const DEFAULT_TWIN_OPTIONS: TwinOptions = {
   mirrorTables: true,
   mirrorCells: false,
   tie: false,
+  harmony: true,
 }
 
 /** Per UPOS, the learned letter swap: each letter maps to its partner (an involution). */

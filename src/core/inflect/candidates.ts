@@ -1,5 +1,6 @@
 // Candidate paradigms for a lemma: those whose lemma pattern fits it, with the shared ranking features.
-import type { Alternations, TwinOptions } from './alternations.ts'
+import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
+import { harmonyClass, harmonyLetters, literalLetters } from './harmony.ts'
 import { matchStems, type Paradigm, stemFit } from './paradigm.ts'
 import { SuffixIndex } from './suffix-index.ts'
 import { letterSides, paradigmSide, tiedClasses } from './twins.ts'
@@ -27,11 +28,15 @@ export class CandidateFinder {
   private readonly analogyMembers: number[]
   /** Per paradigm: whether its mirror image is a paradigm too (a twin, or in the book). */
   private readonly paired: boolean[]
+  /** Per UPOS with a swap: the side of each letter that marks a lemma's harmony class (harmony.ts). */
+  private readonly harmony: Map<string, Record<string, number>>
+  /** Per paradigm with a twin: the twin, and per twin: its original. */
+  private readonly partner: (number | undefined)[]
 
   constructor(
     readonly paradigms: readonly Paradigm[],
     memberLemmas: readonly string[][],
-    alternations: Alternations = {},
+    private readonly alternations: Alternations = {},
     private readonly twinOptions?: TwinOptions,
   ) {
     paradigms.forEach((p, i) => {
@@ -64,12 +69,46 @@ export class CandidateFinder {
       if (p.twinOf !== undefined) this.paired[p.twinOf] = true
       if (tied[i] !== i) this.paired[tied[i]!] = true
     })
+    // Harmony letters from the members of learned paradigms (a twin's mirrored members would mix sides).
+    this.harmony = new Map(
+      [...this.letterSide].map(([u, ls]) => [
+        u,
+        harmonyLetters(
+          ls,
+          paradigms.map((p, i) => (p.upos === u && p.twinOf === undefined ? this.sides[i]! : -1)),
+          memberLemmas.map((ms) => ms.map((m) => m.toLowerCase())),
+          literalLetters(paradigms.filter((p) => p.upos === u)),
+        ),
+      ]),
+    )
+    this.partner = paradigms.map((p) => p.twinOf)
+    paradigms.forEach((p, i) => {
+      if (p.twinOf !== undefined) this.partner[p.twinOf] = i
+    })
     this.analogyMembers = paradigms.map((_, i) => memberLemmas[i]?.length ?? 0)
     this.suffixes = paradigms.map((_, i) => {
       const idx = new SuffixIndex()
       for (const m of memberLemmas[i] ?? []) idx.add(m.toLowerCase())
       return idx
     })
+  }
+
+  /**
+   * Whether a lemma's harmony letters (harmony.ts) are all on one side: a mirrored training copy that is not
+   * (a swap that changes a-ä but leaves u) would teach the harmony features the opposite of the rule.
+   * @example finder.oneSide('käivättu', 'NOUN') // false when u is a back letter
+   */
+  oneSide(lemma: string, upos: string): boolean {
+    const letters = this.harmony.get(upos)
+    if (!letters) return true
+    let seen = -1
+    for (const c of lemma.toLowerCase()) {
+      const s = letters[c]
+      if (s === undefined) continue
+      if (seen >= 0 && s !== seen) return false
+      seen = s
+    }
+    return true
   }
 
   /** UPOS tags that have paradigms. */
@@ -79,21 +118,26 @@ export class CandidateFinder {
 
   /**
    * The paradigms that apply to a lemma. `memberOf` names the paradigm the lemma itself belongs to when it is
-   * a training table, so its own letters are left out of the analogy features (leave-one-out).
+   * a training table, so its own letters are left out of the analogy features (leave-one-out), and its mirror
+   * image out of that paradigm's twin (or of the original, for a twin).
    * @example finder.find('Mantel', 'NOUN').map((c) => c.paradigm) // [0, 3, 8]
    */
   find(lemma: string, upos: string, memberOf = -1): Candidate[] {
     const out: Candidate[] = []
     const lower = lemma.toLowerCase()
+    const skip = this.leftOut(lower, upos, memberOf)
+    const letters = this.harmony.get(upos)
+    const cls = letters ? harmonyClass(lower, letters) : -1
     for (const i of this.applicable(lemma, upos)) {
       const p = this.paradigms[i]!
       const first = p.lemma[0]
       if (typeof first === 'string' && !lemma.startsWith(first)) continue
       const stems = matchStems(p, lemma)
       if (!stems) continue
-      const sfx = this.suffixes[i]!.longestShared(lower, memberOf === i)
-      const shared = this.sharedFeatures(p, i, sfx, stems, memberOf === i)
-      this.sideFeatures(i, lower, shared)
+      const excluded = skip.get(i)
+      const sfx = this.suffixes[i]!.longestShared(lower, excluded === lower ? true : (excluded ?? false))
+      const shared = this.sharedFeatures(p, i, sfx, stems, excluded !== undefined)
+      this.sideFeatures(i, lower, cls, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
       const left = this.leftEdits[i]!
       shared.push(`L:${left}`)
@@ -111,6 +155,23 @@ export class CandidateFinder {
       const gap = Math.max(-4, Math.min(4, c.sfx - (c.sfx === best ? second : best)))
       c.shared.push(`rel:${gap}`, `rel:${gap}:${Math.min(c.sfx, 8)}`)
     }
+    return out
+  }
+
+  /**
+   * The member to leave out of each paradigm's analogy index for a training lemma: the lemma itself in its
+   * own paradigms, and its mirror image in their mirror partners (a twin's members are its original's,
+   * mirrored), so no candidate draws on the example itself.
+   */
+  private leftOut(lower: string, upos: string, own: number): Map<number, string> {
+    const out = new Map<number, string>()
+    if (own < 0) return out
+    out.set(own, lower)
+    const partner = this.partner[own]
+    const swap = this.alternations[upos]
+    if (partner === undefined || !swap) return out
+    const image = mirror(lower, swap)
+    if (image !== lower) out.set(partner, image)
     return out
   }
 
@@ -153,11 +214,15 @@ export class CandidateFinder {
   }
 
   /** Whether the lemma has letters of the paradigm's side of a learned swap, and of the other side. */
-  private sideFeatures(i: number, lower: string, out: string[]): void {
+  private sideFeatures(i: number, lower: string, cls: number, out: string[]): void {
     const side = this.sides[i]!
     const p = this.paradigms[i]!
     const twin = p.twinOf !== undefined
     const paired = this.paired[i]!
+    if (side >= 0 && this.twinOptions?.harmony) {
+      // The lemma's class against the paradigm's side, shared and per paradigm (neutral words: learned).
+      out.push(`hv:${side}:${cls}`, `hv:${cls}|${i}`)
+    }
     if (side < 0 || !(paired || this.twinOptions?.sides)) return
     const letters = this.letterSide.get(p.upos)!
     let hasOwn = 0

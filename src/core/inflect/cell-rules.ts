@@ -9,6 +9,7 @@ import { stemShapes } from './extract.ts'
 import { type FeatureOptions, lemmaFeatures } from './features.ts'
 import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
 import { extractPattern, fillPattern } from './pattern.ts'
+import { withPrior } from './prior.ts'
 import {
   type RankerExample,
   type RankerOptions,
@@ -38,6 +39,7 @@ export function learnCellRules(
   ranker: RankerOptions,
   alternations: Alternations = {},
   twinOptions?: TwinOptions,
+  prior?: number,
 ): CellRuleModel[] {
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
@@ -134,7 +136,7 @@ export function learnCellRules(
       const sameAs = JSON.stringify(examples)
       let first = trained.get(sameAs)
       if (!first) {
-        first = trainRanker(examples, ranker)
+        first = trainRanker(examples, withPrior(ranker, examples.length, prior))
         trained.set(sameAs, first)
       }
       const weights: RankerWeights = { local: first.local, shared: first.shared }

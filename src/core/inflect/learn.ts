@@ -14,6 +14,7 @@ import type { CorpusEvidence } from './corpus-evidence.ts'
 import { sampleByClass } from './example-sample.ts'
 import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
+import { withPrior } from './prior.ts'
 import {
   DEFAULT_RANKER_OPTIONS,
   type RankerExample,
@@ -44,6 +45,11 @@ export interface LearnOptions {
   combine: CombineOptions
   /** Learned letter alternations and twin paradigms (absent in files written before them: off). */
   twins?: TwinOptions
+  /**
+   * L2 strength over a whole training set: a ranker trained on n examples uses at least `prior / n` as its
+   * per-example `ranker.l2` (prior.ts; absent in older files: plain `ranker.l2`).
+   */
+  prior?: number
 }
 
 export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
@@ -54,6 +60,7 @@ export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
   cellRanker: { supportMin: 3 },
   combine: { cellWeight: 10, tableFloor: 0.001, cellFloor: 0.001, meanPower: 1, cellMix: 0.5 },
   twins: DEFAULT_TWIN_OPTIONS,
+  prior: 10,
 }
 
 /** What learning produces: the lexicon, its paradigm book, and the weights that choose among paradigms. */
@@ -129,14 +136,23 @@ export function learnFromLexicon(
       const e = lexicon.entries[tables[t]!]!
       const twin = twinOf.get(book.memberOf[tables[t]!]!)
       const copy = twin === undefined ? null : mirrorEntry(e, alternations[e.upos]!)
-      if (copy) examples.push(example(copy, twin!))
+      // A copy whose harmony letters the swap left on both sides would contradict the harmony features.
+      const consistent = copy && (!options.twins.harmony || finder.oneSide(copy.lemma, copy.upos))
+      if (consistent) examples.push(example(copy, twin!))
     }
   }
-  const weights = trainRanker(examples, options.ranker)
+  const weights = trainRanker(examples, withPrior(options.ranker, examples.length, options.prior))
   if (classOf) weights.classOf = classOf
   const cells =
     options.combine.cellWeight > 0 || options.combine.cellMix > 0
-      ? learnCellRules(lexicon, options.features, { ...options.ranker, ...options.cellRanker }, alternations, options.twins)
+      ? learnCellRules(
+          lexicon,
+          options.features,
+          { ...options.ranker, ...options.cellRanker },
+          alternations,
+          options.twins,
+          options.prior,
+        )
       : []
   return { lexicon, book, alternations, weights, finder, cells, options }
 }

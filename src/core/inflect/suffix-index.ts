@@ -31,24 +31,33 @@ export class SuffixIndex {
 
   /**
    * The longest suffix of `word` shared with some member, its member count, and whether a whole member is
-   * a suffix of `word` (a compound ending in a member word). `exclude` leaves one copy of `word` out.
+   * a suffix of `word` (a compound ending in a member word). `exclude` leaves one member out: `word` itself
+   * (true), or another member (a string), counted only where its letters follow the same path.
    * @example idx.longestShared('aasfliege', false) // { length: 6, count: 2, wholeMember: true }
    */
-  longestShared(word: string, exclude: boolean): { length: number; count: number; wholeMember: boolean } {
+  longestShared(
+    word: string,
+    exclude: boolean | string,
+  ): { length: number; count: number; wholeMember: boolean } {
     const chars = [...word]
+    const out = exclude === true ? chars : typeof exclude === 'string' ? [...exclude] : null
     let node = 0
     let length = 0
-    let count = this.counts[0]! - (exclude ? 1 : 0)
+    let count = this.counts[0]! - (out ? 1 : 0)
     let wholeMember = false
+    // The excluded member shares the path while its letters from the end are the word's.
+    let onPath = out !== null
     for (let i = chars.length - 1; i >= 0; i--) {
       const next = this.edges.get(node * CODE_SPAN + chars[i]!.codePointAt(0)!)
       if (next === undefined) break
-      const c = this.counts[next]! - (exclude ? 1 : 0)
+      const d = chars.length - 1 - i
+      onPath = onPath && d < out!.length && out![out!.length - 1 - d] === chars[i]
+      const c = this.counts[next]! - (onPath ? 1 : 0)
       if (c <= 0) break
       node = next
       length++
       count = c
-      const endsHere = this.ends[node]! - (exclude && i === 0 ? 1 : 0)
+      const endsHere = this.ends[node]! - (onPath && d === out!.length - 1 ? 1 : 0)
       if (endsHere > 0 && i > 0) wholeMember = true
     }
     return { length, count, wholeMember }
