@@ -12,7 +12,8 @@ export type RawCells = [CellRef, ...string[]][]
 
 /**
  * The table slot of an entry record (see FORMAT.md): `p` (paradigm p applied to the lemma gives the table),
- * `{p, s}` (paradigm p with these stems), `{p, f}` (raw cells; p = its paradigm or -1), or for a bare lemma
+ * `{p, s}` (paradigm p with these stems), `{p, m, d}` (paradigm p's table without cells m, cells d replaced),
+ * `{p, f}` (raw cells; p = its paradigm or -1), or for a bare lemma
  * the array of kept tables `[p, score×10⁴]` / `[p, score×10⁴, rawCells]` / `[p, score×10⁴, {d: rawCells}]`
  * (only the cells that differ from paradigm p's table of the lemma), with a trailing 1 for a table that
  * only completes the cells of forms the others license.
@@ -21,6 +22,7 @@ export type TableJson =
   | number
   | { p: number; s: string[] }
   | { p: number; f: RawCells }
+  | { p: number; m: number[]; d: RawCells }
   | [number, number, ...(RawCells | Differing | 1)[]][]
 
 /** Since 2.0: a kept table as the cells where it differs from its paradigm's table of the lemma. */
@@ -51,8 +53,38 @@ export function encodeAttested(
       const filled = par.cells.map((c) => ({ key: c.key, forms: c.forms.map((f) => fillPattern(f, stems)) }))
       if (sameCells(cells, filled)) return { p, s: stems }
     }
+    const raw = { p, f: encodeCells(cells, cellKeys) }
+    const partial = encodePartial(cells, baseCells(e.lemma, par), cellKeys)
+    // The shorter of the two (a table with most cells missing is shorter as its forms).
+    return partial && JSON.stringify(partial).length < JSON.stringify(raw.f).length ? { p, ...partial } : raw
   }
-  return { p: par ? p : -1, f: encodeCells(cells, cellKeys) }
+  return { p: -1, f: encodeCells(cells, cellKeys) }
+}
+
+/**
+ * A table as paradigm p's table of the lemma without some cells (`m`, positions in the paradigm's cells)
+ * and with others replaced (`d`) — a defective table, or one with other variants — when its cells are
+ * the paradigm's in the paradigm's order. Null when they are not.
+ */
+function encodePartial(
+  cells: readonly Cell[],
+  base: Cell[] | null,
+  cellKeys: readonly string[],
+): { m: number[]; d: RawCells } | null {
+  if (!base) return null
+  const missing: number[] = []
+  const differing: Cell[] = []
+  let at = 0
+  base.forEach((b, i) => {
+    const c = cells[at]
+    if (c?.key !== b.key) {
+      missing.push(i)
+      return
+    }
+    if (!sameCells([c], [b])) differing.push(c)
+    at++
+  })
+  return at === cells.length ? { m: missing, d: encodeCells(differing, cellKeys) } : null
 }
 
 /**
@@ -136,6 +168,16 @@ export function decodeTable(
     }
   }
   if (t && 'f' in t && Array.isArray(t.f)) return { paradigm: t.p, cells: decodeCells(t.f, cellKeys) }
+  if (t && 'm' in t && Array.isArray(t.m) && Array.isArray(t.d)) {
+    const base = baseCells(lemma, paradigms[t.p])
+    if (!base) throw bad(`${lemma}: paradigm ${t.p} does not apply`)
+    const missing = new Set(t.m)
+    const changed = new Map(decodeCells(t.d, cellKeys).map((c) => [c.key, c]))
+    return {
+      paradigm: t.p,
+      cells: base.flatMap((c, i) => (missing.has(i) ? [] : [changed.get(c.key) ?? c])),
+    }
+  }
   throw bad(`${lemma}: unreadable table`)
 }
 

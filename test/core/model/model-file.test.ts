@@ -56,7 +56,7 @@ describe('model file', () => {
     expect(encodeModel(buildModel([...germanTables, ...germanBareLemmas]))).toBe(text)
   })
 
-  it('stores a table its paradigm reproduces as the paradigm alone, any other as raw forms', () => {
+  it('stores a table its paradigm reproduces as the paradigm alone, a table with most cells missing as raw forms', () => {
     // A table with gaps joins the full paradigm that reproduces the cells it has; the paradigm alone would
     // give cells the dictionary never listed, so the file keeps its forms.
     const gapped = {
@@ -75,6 +75,24 @@ describe('model file', () => {
     expect(raw.f.map((c) => c.slice(1)).sort()).toEqual([['holen'], ['holt']])
     const back = decodeModel(encodeModel(m)).inflection.lexicon.entries.find((e) => e.lemma === 'holen')
     expect(back!.cells).toEqual(m.inflection.lexicon.entries.find((e) => e.lemma === 'holen')!.cells)
+  })
+
+  it('stores a table that lacks a few of its paradigm cells as the paradigm and the missing cells', () => {
+    const machen = germanTables.find((e) => e.lemma === 'machen')!
+    const forms = machen.forms!
+    // wachen, like machen, without its 1st person singular present.
+    const wachen = {
+      ...machen,
+      lemma: 'wachen',
+      forms: forms.filter((f) => f.form !== 'mache').map((f) => ({ ...f, form: f.form.replace('mach', 'wach') })),
+    }
+    const m = buildModel([...germanTables, wachen])
+    const json = JSON.parse(encodeModel(m))
+    const slot = json.entries.find((e: unknown[]) => e[0] === 'wachen')[3]
+    expect(slot.m).toHaveLength(forms.filter((f) => f.form === 'mache').length)
+    expect(slot.d).toEqual([])
+    const back = decodeModel(encodeModel(m)).inflection.lexicon.entries.find((e) => e.lemma === 'wachen')
+    expect(back!.cells).toEqual(m.inflection.lexicon.entries.find((e) => e.lemma === 'wachen')!.cells)
   })
 
   it('keeps the predicted tables of bare lemmas with their scores', () => {
