@@ -14,6 +14,21 @@ export interface Candidate {
   sfx: number
 }
 
+/**
+ * The suffix index of one member list, built once per list: rule rankers of cells that split the tables
+ * alike are given the same lists (see decodeAllCellRules), and an index is never changed once built.
+ */
+const suffixIndexes = new WeakMap<readonly string[], SuffixIndex>()
+function suffixIndexOf(members: readonly string[]): SuffixIndex {
+  let idx = suffixIndexes.get(members)
+  if (!idx) {
+    idx = new SuffixIndex()
+    for (const m of members) idx.add(m.toLowerCase())
+    suffixIndexes.set(members, idx)
+  }
+  return idx
+}
+
 /** Paradigms of one book, indexed for fast candidate search and analogy features. */
 export class CandidateFinder {
   private readonly byUpos = new Map<string, number[]>()
@@ -86,11 +101,7 @@ export class CandidateFinder {
       if (p.twinOf !== undefined) this.partner[p.twinOf] = i
     })
     this.analogyMembers = paradigms.map((_, i) => memberLemmas[i]?.length ?? 0)
-    this.suffixes = paradigms.map((_, i) => {
-      const idx = new SuffixIndex()
-      for (const m of memberLemmas[i] ?? []) idx.add(m.toLowerCase())
-      return idx
-    })
+    this.suffixes = paradigms.map((_, i) => suffixIndexOf(memberLemmas[i] ?? []))
   }
 
   /**

@@ -64,6 +64,8 @@ export function decodeAllCellRules(
   featureNames?: readonly string[],
 ): CellRuleModel[] {
   const decoded: RankerWeights[] = []
+  // Cells with the same members share the lemma lists, so their candidate finders share suffix indexes.
+  const memberLists = new Map<string, string[][]>()
   const earlier = (v: number, i: number, what: string): CellRulesJson => {
     const target = list[v]
     if (!Number.isInteger(v) || v < 0 || v >= i || !target)
@@ -80,7 +82,7 @@ export function decodeAllCellRules(
       shared = { local: w.local, shared: w.shared }
       weights = EMPTY
     }
-    const m = decodeCellRules({ ...json, members, weights }, entries, cellsOf(json.upos), alternations, twinOptions, featureNames, shared)
+    const m = decodeCellRules({ ...json, members, weights }, entries, cellsOf(json.upos), alternations, twinOptions, featureNames, shared, memberLists)
     decoded.push(m.weights)
     return m
   })
@@ -150,6 +152,7 @@ export function decodeCellRules(
   twinOptions?: TwinOptions,
   featureNames?: readonly string[],
   sharedWeights?: RankerWeights,
+  memberLists?: Map<string, string[][]>,
 ): CellRuleModel {
   const key = typeof json.cell === 'number' ? cellKeys[json.cell] : json.cell
   if (key === undefined)
@@ -157,20 +160,8 @@ export function decodeCellRules(
   const seen = json.rules.map((r) => decodeParadigm(r, cellKeys))
   if (typeof json.members !== 'string' || typeof json.weights === 'number')
     throw new ProblemError({ code: 'bad-model', message: 'model file: a cell refers to another; read it with decodeAllCellRules' })
-  const ints = decode(json.members)
-  let at = 0
-  const lemmas = seen.map(() => {
-    const n = ints[at++]!
-    const list: string[] = []
-    let i = 0
-    for (let k = 0; k < n; k++) {
-      i += ints[at++]!
-      const e = entries[i]
-      if (!e) throw new ProblemError({ code: 'bad-model', message: `model file: no entry ${i}` })
-      list.push(e.lemma)
-    }
-    return list
-  })
+  const lemmas = memberLists?.get(json.members) ?? memberLemmas(json.members, seen.length, entries)
+  memberLists?.set(json.members, lemmas)
   const twinned = withTwins(seen, lemmas, alternations)
   const weights = sharedWeights ?? decodeWeights(json.weights, featureNames)
   if (twinOptions?.tie) weights.classOf = tiedClasses(twinned.paradigms, alternations)
@@ -181,4 +172,22 @@ export function decodeCellRules(
     weights,
     finder: new CandidateFinder(twinned.paradigms, twinned.members, alternations, twinOptions),
   }
+}
+
+/** The member lemmas of each of `n` rules, from a cell's `members` string. */
+function memberLemmas(members: string, n: number, entries: readonly LexEntry[]): string[][] {
+  const ints = decode(members)
+  let at = 0
+  return Array.from({ length: n }, () => {
+    const count = ints[at++]!
+    const list: string[] = []
+    let i = 0
+    for (let k = 0; k < count; k++) {
+      i += ints[at++]!
+      const e = entries[i]
+      if (!e) throw new ProblemError({ code: 'bad-model', message: `model file: no entry ${i}` })
+      list.push(e.lemma)
+    }
+    return list
+  })
 }
