@@ -14,8 +14,8 @@ import {
   type RankerOptions,
   type RankerWeights,
   scoreCandidates,
-  trainRanker,
 } from './ranker.ts'
+import { trainRanker } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */

@@ -19,8 +19,8 @@ import {
   type RankerExample,
   type RankerOptions,
   type RankerWeights,
-  trainRanker,
 } from './ranker.ts'
+import { trainRanker } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */

@@ -1,6 +1,7 @@
 // A log-linear ranker over candidate classes (paradigms, or one cell's rules): per-class shape weights
 // plus weights shared by all classes (analogy strength, stem fit), trained by AdaGrad on the
-// log-likelihood of the set of classes that are correct (several may be: their probabilities add up).
+// log-likelihood of the set of classes that are correct (several may be: their probabilities add up);
+// training is in ranker-train.ts.
 
 /** One training item: candidate classes, their shared features, and which candidates are correct. */
 export interface RankerExample {
@@ -120,117 +121,6 @@ function softmax(s: ArrayLike<number>): number[] {
     z += x
   }
   return e.map((x) => x / z)
-}
-
-interface Coded {
-  /** Weight slot of (local feature j, candidate i) at j * candidates + i. */
-  slots: Int32Array
-  nLocal: number
-  shared: Int32Array[]
-  gold: Uint8Array
-}
-
-/**
- * Train the ranker; examples are visited in a seeded shuffled order, so runs are identical. Weights are kept
- * only for the (feature, class) pairs some example can touch, so memory grows with the examples, not with
- * features × classes.
- */
-export function trainRanker(
-  examples: RankerExample[],
-  opts: RankerOptions = DEFAULT_RANKER_OPTIONS,
-): RankerWeights {
-  const localIds = new Map<string, number>()
-  const sharedIds = new Map<string, number>()
-  const id = (m: Map<string, number>, k: string) => {
-    let v = m.get(k)
-    if (v === undefined) {
-      v = m.size
-      m.set(k, v)
-    }
-    return v
-  }
-  const pairSlots = new Map<number, number>() // feature id * 2^21 + class → slot
-  const pairOf: number[] = []
-  const coded: Coded[] = []
-  for (const ex of examples) {
-    if (ex.candidates.length < 2 || ex.gold.length === 0) continue
-    const n = ex.candidates.length
-    const gold = new Uint8Array(n)
-    for (const g of ex.gold) gold[g] = 1
-    const slots = new Int32Array(ex.local.length * n)
-    ex.local.forEach((f, j) => {
-      const fi = id(localIds, f)
-      for (let i = 0; i < n; i++) {
-        const pair = fi * 2097152 + ex.candidates[i]!
-        let slot = pairSlots.get(pair)
-        if (slot === undefined) {
-          slot = pairOf.length
-          pairSlots.set(pair, slot)
-          pairOf.push(pair)
-        }
-        slots[j * n + i] = slot
-      }
-    })
-    coded.push({
-      slots,
-      nLocal: ex.local.length,
-      shared: ex.shared.map((fs) => Int32Array.from(fs, (f) => id(sharedIds, f))),
-      gold,
-    })
-  }
-  const wl = new Float64Array(pairOf.length)
-  const gl = new Float64Array(pairOf.length)
-  const ws = new Float64Array(sharedIds.size)
-  const gs = new Float64Array(sharedIds.size)
-  const rand = mulberry32(opts.seed)
-  const order = coded.map((_, i) => i)
-  const { rate, l2 } = opts
-  for (let epoch = 0; epoch < opts.epochs; epoch++) {
-    for (let i = order.length - 1; i > 0; i--) {
-      const j = Math.floor(rand() * (i + 1))
-      ;[order[i], order[j]] = [order[j]!, order[i]!]
-    }
-    for (const idx of order) {
-      const ex = coded[idx]!
-      const n = ex.gold.length
-      const scores = new Float64Array(n)
-      for (let i = 0; i < n; i++) {
-        let v = 0
-        for (let j = 0; j < ex.nLocal; j++) v += wl[ex.slots[j * n + i]!]!
-        for (const f of ex.shared[i]!) v += ws[f]!
-        scores[i] = v
-      }
-      const p = softmax(scores)
-      let zg = 0
-      for (let i = 0; i < n; i++) if (ex.gold[i]) zg += p[i]!
-      if (zg <= 0) continue
-      for (let i = 0; i < n; i++) {
-        const grad = p[i]! - (ex.gold[i] ? p[i]! / zg : 0)
-        if (Math.abs(grad) < 1e-6) continue
-        for (let j = 0; j < ex.nLocal; j++) {
-          const k = ex.slots[j * n + i]!
-          const g = grad + l2 * wl[k]!
-          gl[k]! += g * g
-          wl[k]! -= (rate * g) / Math.sqrt(gl[k]! + 1e-8)
-        }
-        for (const f of ex.shared[i]!) {
-          const g = grad + l2 * ws[f]!
-          gs[f]! += g * g
-          ws[f]! -= (rate * g) / Math.sqrt(gs[f]! + 1e-8)
-        }
-      }
-    }
-  }
-  const out: RankerWeights = { local: new Map(), shared: new Map() }
-  const prune = coded.length >= (opts.pruneFrom ?? 0) ? (opts.prune ?? 0) : 0
-  const names = [...localIds.keys()]
-  const bySlot = pairOf.map((_, s) => s).sort((a, b) => pairOf[a]! - pairOf[b]!) // feature order, then class
-  for (const s of bySlot) {
-    const v = wl[s]!
-    if (v !== 0 && Math.abs(v) >= prune) out.local.set(`${names[Math.floor(pairOf[s]! / 2097152)]}\u0000${pairOf[s]! % 2097152}`, v)
-  }
-  for (const [f, fi] of sharedIds) if (ws[fi] !== 0) out.shared.set(f, ws[fi]!)
-  return out
 }
 
 /** A small seeded generator (mulberry32), so training is deterministic everywhere. */

@@ -1,0 +1,95 @@
+// Training the log-linear ranker (ranker.ts): examples coded once into flat typed arrays, then AdaGrad
+// epochs over them in a seeded order (Duchi, Hazan & Singer 2011, JMLR), so runs are identical.
+import { mulberry32, type RankerExample, type RankerOptions, type RankerWeights } from './ranker.ts'
+import { codeExamples } from './ranker-coding.ts'
+
+/**
+ * Train the ranker; examples are visited in a seeded shuffled order, so runs are identical. Weights are kept
+ * only for the (feature, class) pairs some example can touch, so memory grows with the examples, not with
+ * features × classes.
+ * @example trainRanker([{ local: ['b'], candidates: [0, 1], shared: [['sfx:2'], ['sfx:0']], gold: [0] }], opts).shared.get('sfx:2') // > 0
+ */
+export function trainRanker(examples: RankerExample[], opts: RankerOptions): RankerWeights {
+  const c = codeExamples(examples)
+  const count = c.start.length - 1
+  const wl = new Float64Array(c.pairCount)
+  const gl = new Float64Array(c.pairCount)
+  const ws = new Float64Array(c.sharedNames.length)
+  const gs = new Float64Array(c.sharedNames.length)
+  const rand = mulberry32(opts.seed)
+  const order = Array.from({ length: count }, (_, i) => i)
+  const { rate, l2 } = opts
+  const { start, width, ids, candStart, gold } = c
+  const scores = new Float64Array(c.maxCandidates)
+  const p = new Float64Array(c.maxCandidates)
+  for (let epoch = 0; epoch < opts.epochs; epoch++) {
+    for (let i = order.length - 1; i > 0; i--) {
+      const j = Math.floor(rand() * (i + 1))
+      const t = order[i]!
+      order[i] = order[j]!
+      order[j] = t
+    }
+    for (let o = 0; o < count; o++) {
+      const idx = order[o]!
+      const c0 = start[idx]!
+      const n = start[idx + 1]! - c0
+      const nl = width[idx]!
+      // Candidate i's ids start at candStart[c0 + i]: its local weight slots (nl), then its shared features.
+      let max = Number.NEGATIVE_INFINITY
+      for (let i = 0; i < n; i++) {
+        const base = candStart[c0 + i]!
+        let v = 0
+        for (let j = 0; j < nl; j++) v += wl[ids[base + j]!]!
+        const s1 = candStart[c0 + i + 1]!
+        for (let k = base + nl; k < s1; k++) v += ws[ids[k]!]!
+        scores[i] = v
+        if (v > max) max = v
+      }
+      let z = 0
+      for (let i = 0; i < n; i++) {
+        const x = Math.exp(scores[i]! - max)
+        p[i] = x
+        z += x
+      }
+      let zg = 0
+      for (let i = 0; i < n; i++) {
+        p[i] = p[i]! / z
+        if (gold[c0 + i]) zg += p[i]!
+      }
+      if (zg <= 0) continue
+      for (let i = 0; i < n; i++) {
+        const grad = p[i]! - (gold[c0 + i] ? p[i]! / zg : 0)
+        if (Math.abs(grad) < 1e-6) continue
+        const base = candStart[c0 + i]!
+        for (let j = 0; j < nl; j++) {
+          const k = ids[base + j]!
+          const g = grad + l2 * wl[k]!
+          gl[k]! += g * g
+          wl[k]! -= (rate * g) / Math.sqrt(gl[k]! + 1e-8)
+        }
+        const s1 = candStart[c0 + i + 1]!
+        for (let s = base + nl; s < s1; s++) {
+          const f = ids[s]!
+          const g = grad + l2 * ws[f]!
+          gs[f]! += g * g
+          ws[f]! -= (rate * g) / Math.sqrt(gs[f]! + 1e-8)
+        }
+      }
+    }
+  }
+  const out: RankerWeights = { local: new Map(), shared: new Map() }
+  const prune = count >= (opts.pruneFrom ?? 0) ? (opts.prune ?? 0) : 0
+  const { pairFeature, pairClass, localNames } = c
+  const bySlot = Array.from({ length: c.pairCount }, (_, s) => s).sort(
+    (a, b) => pairFeature[a]! - pairFeature[b]! || pairClass[a]! - pairClass[b]!,
+  ) // feature order, then class
+  for (const s of bySlot) {
+    const v = wl[s]!
+    if (v !== 0 && Math.abs(v) >= prune)
+      out.local.set(`${localNames[pairFeature[s]!]}\u0000${pairClass[s]}`, v)
+  }
+  c.sharedNames.forEach((f, fi) => {
+    if (ws[fi] !== 0) out.shared.set(f, ws[fi]!)
+  })
+  return out
+}
