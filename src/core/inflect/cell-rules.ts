@@ -15,7 +15,8 @@ import {
   type RankerWeights,
   scoreCandidates,
 } from './ranker.ts'
-import { trainRanker } from './ranker-train.ts'
+import { ExampleCoder } from './ranker-coding.ts'
+import { trainCoded } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
@@ -42,12 +43,15 @@ export function learnCellRules(
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
     const tables = lex.entries.filter((e) => e.upos === upos && e.cells)
+    // A table's lemma features are the same in every cell: made once (and once for its mirror image).
+    const localOf: string[][] = []
+    const mirroredOf: string[][] = []
     for (const key of keys) {
       const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: string[][] }>()
       const own: number[] = []
       const order: string[] = []
-      const items: { lemma: string; inherent: string; forms: string[] }[] = []
-      for (const e of tables) {
+      const items: { lemma: string; inherent: string; forms: string[]; t: number }[] = []
+      for (const [t, e] of tables.entries()) {
         const cell = e.cells!.find((c) => c.key === key)
         if (!cell) continue
         const tp = extractPattern(e.lemma, [cell.forms[0]!])
@@ -75,7 +79,7 @@ export function learnCellRules(
         g.lemmas.push(e.lemma)
         g.stems.push(tp.stems)
         own.push(g.index)
-        items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms })
+        items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms, t })
       }
       const seen = order.map((s, i) => {
         const g = groups.get(s)!
@@ -96,9 +100,11 @@ export function learnCellRules(
       const finder = new CandidateFinder(rules, twinned.members, alternations, twinOptions)
       const classOf = twinOptions?.tie ? tiedClasses(rules, alternations) : undefined
       const picked = sampleByClass(own, ranker.maxExamples ?? 0, ranker.seed)
+      const coder = new ExampleCoder()
       const example = (
         it: { lemma: string; inherent: string; forms: string[] },
         rule: number,
+        local: string[],
       ): RankerExample => {
         const found = finder.find(it.lemma, upos, rule)
         const gold: number[] = []
@@ -106,13 +112,17 @@ export function learnCellRules(
           if (it.forms.includes(fillPattern(rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems))) gold.push(k)
         })
         return {
-          local: lemmaFeatures(it.lemma, it.inherent, features),
+          local,
           candidates: found.map((c) => classOf?.[c.paradigm] ?? c.paradigm),
           shared: found.map((c) => c.shared),
           gold,
         }
       }
-      const examples = picked.map((i) => example(items[i]!, own[i]!))
+      for (const i of picked) {
+        const it = items[i]!
+        localOf[it.t] ??= lemmaFeatures(it.lemma, it.inherent, features)
+        coder.add(example(it, own[i]!, localOf[it.t]!))
+      }
       const swap = alternations[upos]
       if (swap && twinOptions?.mirrorCells) {
         const twinOf = new Map(
@@ -123,12 +133,12 @@ export function learnCellRules(
           const twin = twinOf.get(own[i]!)
           const lemma = mirror(it.lemma, swap)
           if (twin === undefined || lemma === it.lemma) continue
-          examples.push(
-            example({ lemma, inherent: it.inherent, forms: it.forms.map((f) => mirror(f, swap)) }, twin),
-          )
+          mirroredOf[it.t] ??= lemmaFeatures(lemma, it.inherent, features)
+          const copy = { lemma, inherent: it.inherent, forms: it.forms.map((f) => mirror(f, swap)) }
+          coder.add(example(copy, twin, mirroredOf[it.t]!))
         }
       }
-      const weights = trainRanker(examples, ranker)
+      const weights = trainCoded(coder.done(), ranker)
       if (classOf) weights.classOf = classOf
       out.push({ upos, key, rules, weights, finder })
     }

@@ -20,7 +20,8 @@ import {
   type RankerOptions,
   type RankerWeights,
 } from './ranker.ts'
-import { trainRanker } from './ranker-train.ts'
+import { ExampleCoder } from './ranker-coding.ts'
+import { trainCoded } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
@@ -116,7 +117,8 @@ export function learnFromLexicon(
       gold,
     }
   }
-  const examples = picked.map((t) => example(lexicon.entries[tables[t]!]!, book.memberOf[tables[t]!]!))
+  const coder = new ExampleCoder()
+  for (const t of picked) coder.add(example(lexicon.entries[tables[t]!]!, book.memberOf[tables[t]!]!))
   // A table whose paradigm has a twin, mirrored, is what the twin's members would look like: training on
   // these copies teaches the ranker when a twin applies (they are never entries of the model).
   if (options.twins?.mirrorTables) {
@@ -124,10 +126,10 @@ export function learnFromLexicon(
       const e = lexicon.entries[tables[t]!]!
       const twin = twinOf.get(book.memberOf[tables[t]!]!)
       const copy = twin === undefined ? null : mirrorEntry(e, alternations[e.upos]!)
-      if (copy) examples.push(example(copy, twin!))
+      if (copy) coder.add(example(copy, twin!))
     }
   }
-  const weights = trainRanker(examples, options.ranker)
+  const weights = trainCoded(coder.done(), options.ranker)
   if (classOf) weights.classOf = classOf
   const cells =
     options.combine.cellWeight > 0 || options.combine.cellMix > 0

@@ -91,65 +91,72 @@ class PairSlots {
 }
 
 /**
- * Code the trainable examples (fewer than two candidates or no gold one: nothing to learn, left out).
- * Slots are numbered in order of first use, as the training reads them.
- * @example codeExamples([{ local: ['b'], candidates: [3, 7], shared: [['x'], ['y']], gold: [0] }]).pairCount // 2
+ * Codes the trainable examples of one training set as they are made (fewer than two candidates or no gold
+ * one: nothing to learn, left out), so their feature strings need not outlive them. Slots are numbered in
+ * order of first use, as the training reads them.
+ * @example const c = new ExampleCoder(); c.add({ local: ['b'], candidates: [3, 7], shared: [['x'], ['y']], gold: [0] }); c.done().pairCount // 2
  */
-export function codeExamples(examples: readonly RankerExample[]): CodedExamples {
-  const localIds = new Map<string, number>()
-  const sharedIds = new Map<string, number>()
-  const id = (m: Map<string, number>, k: string) => {
-    let v = m.get(k)
-    if (v === undefined) {
-      v = m.size
-      m.set(k, v)
-    }
-    return v
-  }
-  const pairs = new PairSlots()
-  const start = new IntList()
-  const width = new IntList()
-  const candStart = new IntList()
-  const ids = new IntList()
-  const gold: number[] = []
-  let maxCandidates = 0
-  let cand = 0
-  const local: number[] = []
-  for (const ex of examples) {
-    if (ex.candidates.length < 2 || ex.gold.length === 0) continue
+export class ExampleCoder {
+  private readonly localIds = new Map<string, number>()
+  private readonly sharedIds = new Map<string, number>()
+  private readonly pairs = new PairSlots()
+  private readonly start = new IntList()
+  private readonly width = new IntList()
+  private readonly candStart = new IntList()
+  private readonly ids = new IntList()
+  private readonly gold = new IntList()
+  private readonly local: number[] = []
+  private maxCandidates = 0
+
+  /** Code one example. */
+  add(ex: RankerExample): void {
+    if (ex.candidates.length < 2 || ex.gold.length === 0) return
     const n = ex.candidates.length
-    if (n > maxCandidates) maxCandidates = n
-    start.push(cand)
-    width.push(ex.local.length)
+    if (n > this.maxCandidates) this.maxCandidates = n
+    const { local, ids, gold } = this
+    this.start.push(this.candStart.length)
+    this.width.push(ex.local.length)
     local.length = 0
-    for (const f of ex.local) local.push(id(localIds, f))
+    for (const f of ex.local) local.push(intern(this.localIds, f))
     const g0 = gold.length
     for (let i = 0; i < n; i++) gold.push(0)
-    for (const g of ex.gold) gold[g0 + g] = 1
+    for (const g of ex.gold) gold.data[g0 + g] = 1
     // Slots are numbered feature by feature (then candidate), as they were first met.
     const slotOf = new Int32Array(local.length * n)
     for (let j = 0; j < local.length; j++)
-      for (let i = 0; i < n; i++) slotOf[j * n + i] = pairs.slot(local[j]!, ex.candidates[i]!)
+      for (let i = 0; i < n; i++) slotOf[j * n + i] = this.pairs.slot(local[j]!, ex.candidates[i]!)
     for (let i = 0; i < n; i++) {
-      candStart.push(ids.length)
+      this.candStart.push(ids.length)
       for (let j = 0; j < local.length; j++) ids.push(slotOf[j * n + i]!)
-      for (const f of ex.shared[i]!) ids.push(id(sharedIds, f))
+      for (const f of ex.shared[i]!) ids.push(intern(this.sharedIds, f))
     }
-    cand += n
   }
-  start.push(cand)
-  candStart.push(ids.length)
-  return {
-    start: start.done(),
-    width: width.done(),
-    candStart: candStart.done(),
-    ids: ids.done(),
-    gold: Uint8Array.from(gold),
-    maxCandidates,
-    pairCount: pairs.feature.length,
-    pairFeature: pairs.feature.done(),
-    pairClass: pairs.cls.done(),
-    localNames: [...localIds.keys()],
-    sharedNames: [...sharedIds.keys()],
+
+  /** The coded examples (the coder is not to be used after). */
+  done(): CodedExamples {
+    this.start.push(this.candStart.length)
+    this.candStart.push(this.ids.length)
+    return {
+      start: this.start.done(),
+      width: this.width.done(),
+      candStart: this.candStart.done(),
+      ids: this.ids.done(),
+      gold: Uint8Array.from(this.gold.done()),
+      maxCandidates: this.maxCandidates,
+      pairCount: this.pairs.feature.length,
+      pairFeature: this.pairs.feature.done(),
+      pairClass: this.pairs.cls.done(),
+      localNames: [...this.localIds.keys()],
+      sharedNames: [...this.sharedIds.keys()],
+    }
   }
+}
+
+function intern(m: Map<string, number>, k: string): number {
+  let v = m.get(k)
+  if (v === undefined) {
+    v = m.size
+    m.set(k, v)
+  }
+  return v
 }

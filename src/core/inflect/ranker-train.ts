@@ -1,7 +1,7 @@
 // Training the log-linear ranker (ranker.ts): examples coded once into flat typed arrays, then AdaGrad
 // epochs over them in a seeded order (Duchi, Hazan & Singer 2011, JMLR), so runs are identical.
 import { mulberry32, type RankerExample, type RankerOptions, type RankerWeights } from './ranker.ts'
-import { codeExamples } from './ranker-coding.ts'
+import { type CodedExamples, ExampleCoder } from './ranker-coding.ts'
 
 /**
  * Train the ranker; examples are visited in a seeded shuffled order, so runs are identical. Weights are kept
@@ -10,7 +10,16 @@ import { codeExamples } from './ranker-coding.ts'
  * @example trainRanker([{ local: ['b'], candidates: [0, 1], shared: [['sfx:2'], ['sfx:0']], gold: [0] }], opts).shared.get('sfx:2') // > 0
  */
 export function trainRanker(examples: RankerExample[], opts: RankerOptions): RankerWeights {
-  const c = codeExamples(examples)
+  const coder = new ExampleCoder()
+  for (const ex of examples) coder.add(ex)
+  return trainCoded(coder.done(), opts)
+}
+
+/**
+ * Train on examples coded as they were made (see ExampleCoder), as trainRanker does.
+ * @example const c = new ExampleCoder(); for (const ex of examples) c.add(ex); trainCoded(c.done(), opts)
+ */
+export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights {
   const count = c.start.length - 1
   const wl = new Float64Array(c.pairCount)
   const gl = new Float64Array(c.pairCount)
