@@ -9,12 +9,7 @@ import { stemShapes } from './extract.ts'
 import { type FeatureOptions, lemmaFeatures } from './features.ts'
 import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
 import { extractPattern, fillPattern } from './pattern.ts'
-import {
-  type RankerExample,
-  type RankerOptions,
-  type RankerWeights,
-  scoreCandidates,
-} from './ranker.ts'
+import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates } from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
 import { trainCoded } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
