@@ -11,7 +11,7 @@ import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
 import { extractPattern, fillPattern } from './pattern.ts'
 import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates } from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
-import { trainCoded } from './ranker-train.ts'
+import { TrainMemo } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
@@ -41,6 +41,7 @@ export function learnCellRules(
     // A table's lemma features are the same in every cell: made once (and once for its mirror image).
     const localOf: string[][] = []
     const mirroredOf: string[][] = []
+    const memo = new TrainMemo()
     for (const key of keys) {
       const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: string[][] }>()
       const own: number[] = []
@@ -133,7 +134,7 @@ export function learnCellRules(
           coder.add(example(copy, twin, mirroredOf[it.t]!))
         }
       }
-      const weights = trainCoded(coder.done(), ranker)
+      const weights = memo.train(coder.done(), ranker)
       if (classOf) weights.classOf = classOf
       out.push({ upos, key, rules, weights, finder })
     }

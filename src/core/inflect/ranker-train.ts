@@ -102,3 +102,56 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
   })
   return out
 }
+
+/**
+ * Weights already trained, by their coded training set: cells whose rule choice falls the same way for
+ * every table (German nominative, accusative and genitive plural; most adjective cells) make identical
+ * training sets, and training is deterministic, so each distinct set is trained once.
+ * @example const memo = new TrainMemo(); memo.train(coded, opts) // trains; the same set again is copied
+ */
+export class TrainMemo {
+  private readonly seen = new Map<
+    number,
+    { coded: CodedExamples; opts: RankerOptions; weights: RankerWeights }[]
+  >()
+
+  /** As trainCoded, or a copy of the weights of an identical set trained before with the same options. */
+  train(coded: CodedExamples, opts: RankerOptions): RankerWeights {
+    const h = fingerprint(coded)
+    const list = this.seen.get(h) ?? []
+    const hit = list.find((s) => s.opts === opts && sameCoded(s.coded, coded))
+    if (hit) return { local: new Map(hit.weights.local), shared: new Map(hit.weights.shared) }
+    const weights = trainCoded(coded, opts)
+    list.push({ coded, opts, weights: { local: new Map(weights.local), shared: new Map(weights.shared) } })
+    this.seen.set(h, list)
+    return weights
+  }
+}
+
+const arrays = (c: CodedExamples) => [c.start, c.width, c.candStart, c.ids, c.pairFeature, c.pairClass]
+
+function fingerprint(c: CodedExamples): number {
+  let h = 0x811c9dc5
+  for (const a of arrays(c)) {
+    h = Math.imul(h ^ a.length, 0x01000193)
+    for (let i = 0; i < a.length; i++) h = Math.imul(h ^ a[i]!, 0x01000193)
+  }
+  for (let i = 0; i < c.gold.length; i++) h = Math.imul(h ^ c.gold[i]!, 0x01000193)
+  return h
+}
+
+function sameCoded(a: CodedExamples, b: CodedExamples): boolean {
+  const same = (x: ArrayLike<number | string>, y: ArrayLike<number | string>) => {
+    if (x.length !== y.length) return false
+    for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return false
+    return true
+  }
+  const xs = arrays(a)
+  const ys = arrays(b)
+  return (
+    xs.every((x, i) => same(x, ys[i]!)) &&
+    same(a.gold, b.gold) &&
+    same(a.localNames, b.localNames) &&
+    same(a.sharedNames, b.sharedNames)
+  )
+}
