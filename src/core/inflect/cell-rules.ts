@@ -21,6 +21,7 @@ export interface CellRuleModel {
   /** The rules seen in tables, then their twins (see twins.ts). */
   rules: Paradigm[]
   weights: RankerWeights
+  /** Finds the candidate rules (shared by syncretic cells: its paradigms are then another cell's alike rules). */
   finder: CandidateFinder
 }
 
@@ -42,7 +43,18 @@ export function learnCellRules(
     const localOf: string[][] = []
     const mirroredOf: string[][] = []
     const memo = new TrainMemo()
+    // A cell with the same forms as an earlier one in every table (German nominative = accusative plural)
+    // has the same rules, examples and weights: copied under its own key rather than learned again.
+    const bySignature = new Map<string, CellRuleModel>()
     for (const key of keys) {
+      const signature = tables
+        .map((e) => e.cells!.find((c) => c.key === key)?.forms.join('\u0001') ?? '\u0002')
+        .join('\u0003')
+      const alike = bySignature.get(signature)
+      if (alike) {
+        out.push(relabel(alike, key))
+        continue
+      }
       const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: string[][] }>()
       const own: number[] = []
       const order: string[] = []
@@ -136,10 +148,26 @@ export function learnCellRules(
       }
       const weights = memo.train(coder.done(), ranker)
       if (classOf) weights.classOf = classOf
-      out.push({ upos, key, rules, weights, finder })
+      const model = { upos, key, rules, weights, finder }
+      bySignature.set(signature, model)
+      out.push(model)
     }
   }
   return out
+}
+
+/** A cell model under another cell's key: rule ids and cell keys renamed, weights copied, finder shared. */
+function relabel(m: CellRuleModel, key: string): CellRuleModel {
+  const from = `${m.upos}:${m.key}:`
+  const to = `${m.upos}:${key}:`
+  const rules = m.rules.map((r) => ({
+    ...r,
+    id: to + r.id.slice(from.length),
+    cells: r.cells.map((c) => ({ ...c, key })),
+  }))
+  const weights: RankerWeights = { local: new Map(m.weights.local), shared: new Map(m.weights.shared) }
+  if (m.weights.classOf) weights.classOf = [...m.weights.classOf]
+  return { upos: m.upos, key, rules, weights, finder: m.finder }
 }
 
 /** The probability of each form of one cell for a lemma, best first. */
