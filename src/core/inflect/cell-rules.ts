@@ -21,7 +21,7 @@ export interface CellRuleModel {
   /** The rules seen in tables, then their twins (see twins.ts). */
   rules: Paradigm[]
   weights: RankerWeights
-  /** Finds the candidate rules (shared by syncretic cells: its paradigms are then another cell's alike rules). */
+  /** Finds the candidate rules. Syncretic cells share it, and cells sharing it have the same rules and weights. */
   finder: CandidateFinder
 }
 
@@ -170,19 +170,20 @@ function relabel(m: CellRuleModel, key: string): CellRuleModel {
   return { upos: m.upos, key, rules, weights, finder: m.finder }
 }
 
-/** The probability of each form of one cell for a lemma, best first. */
+/** The probability of each form of one cell for a lemma, best first (`local`: the lemma's features, when made already). */
 export function cellFormDistribution(
   m: CellRuleModel,
   lemma: string,
   inherent: string,
   features: FeatureOptions,
+  local: string[] = lemmaFeatures(lemma, inherent, features),
 ): Map<string, number> {
   const found = m.finder.find(lemma, m.upos)
   const dist = new Map<string, number>()
   if (found.length === 0) return dist
   const probs = scoreCandidates(
     m.weights,
-    lemmaFeatures(lemma, inherent, features),
+    local,
     found.map((c) => c.paradigm),
     found.map((c) => c.shared),
   )
