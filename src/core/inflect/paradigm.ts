@@ -58,6 +58,8 @@ const MAX_MATCHES = 64
  * @example matchAll([0, 'a', 1], false, 'Kanal') // [['Kan', 'l'], ['K', 'nal']]
  */
 export function matchAll(lemma: Pattern, openPrefix: boolean, word: string): string[][] {
+  const single = matchSingle(lemma, openPrefix, word)
+  if (single !== undefined) return single
   const out: string[][] = []
   const stems: string[] = []
   const n = word.length
@@ -91,6 +93,27 @@ export function matchAll(lemma: Pattern, openPrefix: boolean, word: string): str
   }
   step(0, 0)
   return out
+}
+
+/**
+ * matchAll for a pattern with one variable (most rules): literal, variable, literal — one match at most, so
+ * no search. Undefined for other patterns.
+ */
+function matchSingle(lemma: Pattern, openPrefix: boolean, word: string): string[][] | undefined {
+  let at = -1
+  for (let i = 0; i < lemma.length; i++) {
+    if (typeof lemma[i] !== 'number') continue
+    if (at >= 0) return undefined
+    at = i
+  }
+  if (at < 0 || lemma[at] !== 0 || lemma.length > at + 2 || at > 1) return undefined
+  const before = at === 1 ? (lemma[0] as string) : ''
+  const after = at + 1 < lemma.length ? (lemma[at + 1] as string) : ''
+  const end = word.length - after.length
+  const min = openPrefix ? 0 : 1
+  if (end < before.length + min || !word.startsWith(before) || !word.endsWith(after)) return []
+  if (end < word.length && isHighSurrogate(word.charCodeAt(end - 1))) return []
+  return [[word.slice(before.length, end)]]
 }
 
 function isHighSurrogate(c: number): boolean {
