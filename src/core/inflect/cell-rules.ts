@@ -107,7 +107,7 @@ export function learnCellRules(
       const rules = twinned.paradigms
       const finder = new CandidateFinder(rules, twinned.members, alternations, twinOptions)
       const classOf = twinOptions?.tie ? tiedClasses(rules, alternations) : undefined
-      const picked = sampleByClass(own, ranker.maxExamples ?? 0, ranker.seed)
+      const picked = sampleByClass(own, cellCap(ranker, order.length), ranker.seed)
       const coder = new ExampleCoder()
       const example = (
         it: { lemma: string; inherent: string; forms: string[] },
@@ -154,6 +154,14 @@ export function learnCellRules(
     }
   }
   return out
+}
+
+/** How many tables a cell's ranker trains on at most, given its rule count (0: all). */
+function cellCap(o: RankerOptions, rules: number): number {
+  const max = o.maxExamples ?? 0
+  if (!o.cellPerRule) return max
+  const bound = Math.max(o.cellFloor ?? 0, o.cellPerRule * rules)
+  return max > 0 ? Math.min(max, bound) : bound
 }
 
 /** A cell model under another cell's key: rule ids and cell keys renamed, weights copied, finder shared. */
