@@ -12,7 +12,7 @@ import { CandidateFinder } from './candidates.ts'
 import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import type { CorpusEvidence } from './corpus-evidence.ts'
 import { sampleByClass } from './example-sample.ts'
-import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
+import { extractParadigms, type ParadigmBook, reproducesWith } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
 import {
   DEFAULT_RANKER_OPTIONS,
@@ -108,7 +108,7 @@ export function learnFromLexicon(
     const found = finder.find(e.lemma, e.upos, own)
     const gold: number[] = []
     found.forEach((c, k) => {
-      if (c.paradigm === own || reproduces(book.paradigms[c.paradigm]!, e)) gold.push(k)
+      if (c.paradigm === own || reproducesWith(book.paradigms[c.paradigm]!, e, c.stems)) gold.push(k)
     })
     return {
       local: lemmaFeatures(e.lemma, e.inherent, options.features),
