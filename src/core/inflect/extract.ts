@@ -38,25 +38,13 @@ export function extractParadigms(lex: Lexicon): ParadigmBook {
     const flat = e.cells.flatMap((c) => c.forms)
     const tp = extractPattern(e.lemma, flat)
     let k = 0
-    const cells: ParadigmCell[] = e.cells.map((c) => ({
-      key: c.key,
-      forms: c.forms.map(() => tp.forms[k++]!),
-    }))
+    const cells: ParadigmCell[] = e.cells.map((c) => ({ key: c.key, forms: c.forms.map(() => tp.forms[k++]!) }))
     const key = paradigmShapeKey(e.upos, tp.lemma, tp.openPrefix, cells)
     let g = groups.get(key)
     if (!g) {
       const have = new Set(cells.map((c) => c.key))
       const gapped = (full.get(e.upos) ?? []).some((c) => !have.has(c))
-      g = {
-        upos: e.upos,
-        lemma: tp.lemma,
-        openPrefix: tp.openPrefix,
-        cells,
-        key,
-        members: [],
-        stems: [],
-        gapped,
-      }
+      g = { upos: e.upos, lemma: tp.lemma, openPrefix: tp.openPrefix, cells, key, members: [], stems: [], gapped }
       groups.set(key, g)
     }
     g.members.push(idx)
@@ -86,7 +74,7 @@ export function extractParadigms(lex: Lexicon): ParadigmBook {
 
   const kept = [...groups.values()].filter((g) => g.members.length > 0)
   const order = new Map(Object.keys(lex.cellKeys).map((u, i) => [u, i]))
-  kept.sort((a, b) => order.get(a.upos)! - order.get(b.upos)! || bySize(a, b))
+  kept.sort((a, b) => (order.get(a.upos)! - order.get(b.upos)!) || bySize(a, b))
   const memberOf = new Array<number>(lex.entries.length).fill(-1)
   const counters = new Map<string, number>()
   const paradigms = kept.map((g, i): Paradigm => {
@@ -161,10 +149,7 @@ function fullInventories(lex: Lexicon): Map<string, string[]> {
   const out = new Map<string, string[]>()
   for (const [upos, m] of counts) {
     const n = tables.get(upos)!
-    out.set(
-      upos,
-      [...m].filter(([, c]) => c >= FULL_CELL_SHARE * n).map(([k]) => k),
-    )
+    out.set(upos, [...m].filter(([, c]) => c >= FULL_CELL_SHARE * n).map(([k]) => k))
   }
   return out
 }
@@ -187,17 +172,8 @@ export function stemShapes(stems: string[][]): StemShape[] {
       minLength = Math.min(minLength, x.length)
       maxLength = Math.max(maxLength, x.length)
     }
-    const seen = [...freq]
-      .sort((a, b) => b[1] - a[1] || (a[0] < b[0] ? -1 : 1))
-      .slice(0, SHAPE_SAMPLE)
-      .map(([s]) => s)
-    shapes.push({
-      seen,
-      first: [...first].sort().join(''),
-      last: [...last].sort().join(''),
-      minLength,
-      maxLength,
-    })
+    const seen = [...freq].sort((a, b) => b[1] - a[1] || (a[0] < b[0] ? -1 : 1)).slice(0, SHAPE_SAMPLE).map(([s]) => s)
+    shapes.push({ seen, first: [...first].sort().join(''), last: [...last].sort().join(''), minLength, maxLength })
   }
   return shapes
 }
