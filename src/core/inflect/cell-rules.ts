@@ -164,7 +164,7 @@ function cellCap(o: RankerOptions, rules: number): number {
   return max > 0 ? Math.min(max, bound) : bound
 }
 
-/** A cell model under another cell's key: rule ids and cell keys renamed, weights copied, finder shared. */
+/** A cell model under another cell's key: rule ids and cell keys renamed, weight maps and finder shared. */
 function relabel(m: CellRuleModel, key: string): CellRuleModel {
   const from = `${m.upos}:${m.key}:`
   const to = `${m.upos}:${key}:`
@@ -173,7 +173,7 @@ function relabel(m: CellRuleModel, key: string): CellRuleModel {
     id: to + r.id.slice(from.length),
     cells: r.cells.map((c) => ({ ...c, key })),
   }))
-  const weights: RankerWeights = { local: new Map(m.weights.local), shared: new Map(m.weights.shared) }
+  const weights: RankerWeights = { local: m.weights.local, shared: m.weights.shared }
   if (m.weights.classOf) weights.classOf = [...m.weights.classOf]
   return { upos: m.upos, key, rules, weights, finder: m.finder }
 }

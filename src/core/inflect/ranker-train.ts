@@ -107,7 +107,7 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
  * Weights already trained, by their coded training set: cells whose rule choice falls the same way for
  * every table (German nominative, accusative and genitive plural; most adjective cells) make identical
  * training sets, and training is deterministic, so each distinct set is trained once.
- * @example const memo = new TrainMemo(); memo.train(coded, opts) // trains; the same set again is copied
+ * @example const memo = new TrainMemo(); memo.train(coded, opts) // trains; the same set again gives the same weights
  */
 export class TrainMemo {
   private readonly seen = new Map<
@@ -115,14 +115,17 @@ export class TrainMemo {
     { coded: CodedExamples; opts: RankerOptions; weights: RankerWeights }[]
   >()
 
-  /** As trainCoded, or a copy of the weights of an identical set trained before with the same options. */
+  /**
+   * As trainCoded, or the weights of an identical set trained before with the same options (their maps are
+   * shared: weights are never changed after training).
+   */
   train(coded: CodedExamples, opts: RankerOptions): RankerWeights {
     const h = fingerprint(coded)
     const list = this.seen.get(h) ?? []
     const hit = list.find((s) => s.opts === opts && sameCoded(s.coded, coded))
-    if (hit) return { local: new Map(hit.weights.local), shared: new Map(hit.weights.shared) }
+    if (hit) return { local: hit.weights.local, shared: hit.weights.shared }
     const weights = trainCoded(coded, opts)
-    list.push({ coded, opts, weights: { local: new Map(weights.local), shared: new Map(weights.shared) } })
+    list.push({ coded, opts, weights })
     this.seen.set(h, list)
     return weights
   }
