@@ -92,8 +92,7 @@ class PairSlots {
 
 /**
  * Codes the trainable examples of one training set as they are made (fewer than two candidates or no gold
- * one: nothing to learn, left out), so their feature strings need not outlive them. Slots are numbered in
- * order of first use, as the training reads them.
+ * one: nothing to learn, left out), so their feature strings need not outlive them.
  * @example const c = new ExampleCoder(); c.add({ local: ['b'], candidates: [3, 7], shared: [['x'], ['y']], gold: [0] }); c.done().pairCount // 2
  */
 export class ExampleCoder {
@@ -121,13 +120,11 @@ export class ExampleCoder {
     const g0 = gold.length
     for (let i = 0; i < n; i++) gold.push(0)
     for (const g of ex.gold) gold.data[g0 + g] = 1
-    // Slots are numbered feature by feature (then candidate), as they were first met.
-    const slotOf = new Int32Array(local.length * n)
-    for (let j = 0; j < local.length; j++)
-      for (let i = 0; i < n; i++) slotOf[j * n + i] = this.pairs.slot(local[j]!, ex.candidates[i]!)
+    // (Slot numbers only name weights: the trained weights come out in (feature, class) order whatever they are.)
     for (let i = 0; i < n; i++) {
       this.candStart.push(ids.length)
-      for (let j = 0; j < local.length; j++) ids.push(slotOf[j * n + i]!)
+      const c = ex.candidates[i]!
+      for (let j = 0; j < local.length; j++) ids.push(this.pairs.slot(local[j]!, c))
       for (const f of ex.shared[i]!) ids.push(intern(this.sharedIds, f))
     }
   }
