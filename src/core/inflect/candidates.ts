@@ -1,7 +1,7 @@
 // Candidate paradigms for a lemma: those whose lemma pattern fits it, with the shared ranking features.
 import type { Alternations, TwinOptions } from './alternations.ts'
 import { matchStems, type Paradigm, stemFit } from './paradigm.ts'
-import { SuffixIndex } from './suffix-index.ts'
+import { codePoints, SuffixIndex } from './suffix-index.ts'
 import { letterSides, paradigmSide, tiedClasses } from './twins.ts'
 
 /** One applicable paradigm for a lemma. */
@@ -85,19 +85,22 @@ export class CandidateFinder {
   find(lemma: string, upos: string, memberOf = -1): Candidate[] {
     const out: Candidate[] = []
     const lower = lemma.toLowerCase()
+    const codes = codePoints(lower)
+    const starts: string[] = []
+    for (let k = 1; k <= Math.min(4, lower.length - 3); k++) starts.push(lower.slice(0, k))
     for (const i of this.applicable(lemma, upos)) {
       const p = this.paradigms[i]!
       const first = p.lemma[0]
       if (typeof first === 'string' && !lemma.startsWith(first)) continue
       const stems = matchStems(p, lemma)
       if (!stems) continue
-      const sfx = this.suffixes[i]!.longestShared(lower, memberOf === i)
+      const sfx = this.suffixes[i]!.longestSharedCodes(codes, memberOf === i)
       const shared = this.sharedFeatures(p, i, sfx, stems, memberOf === i)
       this.sideFeatures(i, lower, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
       const left = this.leftEdits[i]!
       shared.push(`L:${left}`)
-      for (let k = 1; k <= Math.min(4, lower.length - 3); k++) shared.push(`L:${left}|${lower.slice(0, k)}`)
+      for (const start of starts) shared.push(`L:${left}|${start}`)
       out.push({ paradigm: i, stems, shared, sfx: sfx.length })
     }
     // Relative analogy: how this paradigm's longest shared suffix compares with the best candidate's.
