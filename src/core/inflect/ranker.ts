@@ -72,15 +72,54 @@ export function scoreCandidates(
   shared: string[][],
 ): number[] {
   const byFeature = featureIndex(w)
-  const s = new Float64Array(candidates.length)
+  const n = candidates.length
+  const s = new Float64Array(n)
   const cls = w.classOf ? candidates.map((c) => w.classOf![c] ?? c) : candidates
+  const at = positionsByClass(cls)
   for (const f of local) {
     const classes = byFeature.get(f)
     if (!classes) continue
-    for (let i = 0; i < candidates.length; i++) s[i]! += classes.get(cls[i]!) ?? 0
+    // Whichever is fewer: the feature's classes, or the candidates (each score still sums in feature order).
+    if (classes.size < n) {
+      for (const [c, v] of classes) {
+        if (c >= at.stamp.length || at.stamp[c] !== at.call) continue
+        for (let i = at.head[c]!; i >= 0; i = at.next[i]!) s[i]! += v
+      }
+    } else {
+      for (let i = 0; i < n; i++) {
+        const v = classes.get(cls[i]!)
+        if (v !== undefined) s[i]! += v
+      }
+    }
   }
-  for (let i = 0; i < candidates.length; i++) for (const f of shared[i]!) s[i]! += w.shared.get(f) ?? 0
+  for (let i = 0; i < n; i++) for (const f of shared[i]!) s[i]! += w.shared.get(f) ?? 0
   return softmax(s)
+}
+
+/** Candidate positions by class, in scratch arrays reused across calls (valid where stamp[c] === call). */
+const scratch = { call: 0, stamp: new Int32Array(64), head: new Int32Array(64), next: new Int32Array(64) }
+
+function positionsByClass(cls: readonly number[]): typeof scratch {
+  const at = scratch
+  at.call = (at.call + 1) | 0
+  if (at.call === 0) {
+    at.stamp.fill(-1)
+    at.call = 1
+  }
+  let max = 0
+  for (const c of cls) if (c > max) max = c
+  if (max >= at.stamp.length) {
+    at.stamp = new Int32Array(2 * (max + 1))
+    at.head = new Int32Array(2 * (max + 1))
+  }
+  if (cls.length > at.next.length) at.next = new Int32Array(2 * cls.length)
+  for (let i = cls.length - 1; i >= 0; i--) {
+    const c = cls[i]!
+    at.next[i] = at.stamp[c] === at.call ? at.head[c]! : -1
+    at.head[c] = i
+    at.stamp[c] = at.call
+  }
+  return at
 }
 
 const featureIndexes = new WeakMap<Map<string, number>, Map<string, Map<number, number>>>()
