@@ -1,5 +1,9 @@
 // Pairwise alignment of a lemma with one form: which lemma letters survive, in as few contiguous runs as possible.
 
+/** Score tables reused by every alignment (grown when a pair needs more). */
+let scratch0 = new Float64Array(256)
+let scratch1 = new Float64Array(256)
+
 /**
  * Align lemma and form: maximize matched letters, then minimize the number of contiguous runs.
  * Returns, for each lemma position, the form position it maps to or -1.
@@ -15,20 +19,27 @@ export function alignLemmaForm(lemma: string, form: string): number[] {
   const NEG = -1e9
   const w = m + 1
   // s0[i][j]: best score of a[0..i) vs b[0..j) ending without a match at (i-1, j-1); s1: ending with one.
-  const s0 = new Float64Array((n + 1) * w).fill(NEG)
-  const s1 = new Float64Array((n + 1) * w).fill(NEG)
+  // Both are scratch buffers reused across calls; every cell read below is written first.
+  const size = (n + 1) * w
+  if (scratch0.length < size) {
+    scratch0 = new Float64Array(size * 2)
+    scratch1 = new Float64Array(size * 2)
+  }
+  const s0 = scratch0
+  const s1 = scratch1
   for (let i = 0; i <= n; i++) {
     for (let j = 0; j <= m; j++) {
       const k = i * w + j
       if (i === 0 || j === 0) {
         s0[k] = 0
+        s1[k] = NEG
         continue
       }
       s0[k] = Math.max(s0[k - w]!, s1[k - w]!, s0[k - 1]!, s1[k - 1]!)
       if (a[i - 1] === b[j - 1]) {
         const d = k - w - 1
         s1[k] = Math.max(s1[d]! + W, s0[d]! + W - 1)
-      }
+      } else s1[k] = NEG
     }
   }
   const map = new Array<number>(n).fill(-1)

@@ -2,7 +2,7 @@
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { harmonyClass, harmonyLetters, literalLetters } from './harmony.ts'
 import { matchStems, type Paradigm, stemFit } from './paradigm.ts'
-import { SuffixIndex } from './suffix-index.ts'
+import { codePoints, SuffixIndex } from './suffix-index.ts'
 import { letterSides, paradigmSide, tiedClasses } from './twins.ts'
 
 /** One applicable paradigm for a lemma. */
@@ -139,6 +139,9 @@ export class CandidateFinder {
     const skip = this.leftOut(lower, upos, memberOf)
     const letters = this.harmony.get(upos)
     const cls = letters ? harmonyClass(lower, letters) : -1
+    const codes = codePoints(lower)
+    const starts: string[] = []
+    for (let k = 1; k <= Math.min(4, lower.length - 3); k++) starts.push(lower.slice(0, k))
     for (const i of this.applicable(lemma, upos)) {
       const p = this.paradigms[i]!
       const first = p.lemma[0]
@@ -146,13 +149,14 @@ export class CandidateFinder {
       const stems = matchStems(p, lemma)
       if (!stems) continue
       const excluded = skip.get(i)
-      const sfx = this.suffixes[i]!.longestShared(lower, excluded === lower ? true : (excluded ?? false))
+      const leave = excluded === undefined ? false : excluded === lower ? true : codePoints(excluded)
+      const sfx = this.suffixes[i]!.longestSharedCodes(codes, leave)
       const shared = this.sharedFeatures(p, i, sfx, stems, excluded !== undefined)
       this.sideFeatures(i, lower, cls, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
       const left = this.leftEdits[i]!
       shared.push(`L:${left}`)
-      for (let k = 1; k <= Math.min(4, lower.length - 3); k++) shared.push(`L:${left}|${lower.slice(0, k)}`)
+      for (const start of starts) shared.push(`L:${left}|${start}`)
       out.push({ paradigm: i, stems, shared, sfx: sfx.length })
     }
     // Relative analogy: how this paradigm's longest shared suffix compares with the best candidate's.

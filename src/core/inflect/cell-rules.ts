@@ -10,13 +10,9 @@ import { type FeatureOptions, lemmaFeatures } from './features.ts'
 import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
 import { extractPattern, fillPattern } from './pattern.ts'
 import { withPrior } from './prior.ts'
-import {
-  type RankerExample,
-  type RankerOptions,
-  type RankerWeights,
-  scoreCandidates,
-  trainRanker,
-} from './ranker.ts'
+import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates } from './ranker.ts'
+import { ExampleCoder } from './ranker-coding.ts'
+import { TrainMemo } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
@@ -26,6 +22,7 @@ export interface CellRuleModel {
   /** The rules seen in tables, then their twins (see twins.ts). */
   rules: Paradigm[]
   weights: RankerWeights
+  /** Finds the candidate rules. Syncretic cells share it, and cells sharing it have the same rules and weights. */
   finder: CandidateFinder
 }
 
@@ -43,16 +40,28 @@ export function learnCellRules(
 ): CellRuleModel[] {
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
-    // Cells that split the tables alike give identical training examples (most German adjective cells
-    // do): their ranker is trained once and its weights shared.
-    const trained = new Map<string, RankerWeights>()
     const tables = lex.entries.filter((e) => e.upos === upos && e.cells)
+    // A table's lemma features are the same in every cell: made once (and once for its mirror image).
+    const localOf: string[][] = []
+    const mirroredOf: string[][] = []
+    const memo = new TrainMemo()
+    // A cell with the same forms as an earlier one in every table (German nominative = accusative plural)
+    // has the same rules, examples and weights: copied under its own key rather than learned again.
+    const bySignature = new Map<string, CellRuleModel>()
     for (const key of keys) {
+      const signature = tables
+        .map((e) => e.cells!.find((c) => c.key === key)?.forms.join('\u0001') ?? '\u0002')
+        .join('\u0003')
+      const alike = bySignature.get(signature)
+      if (alike) {
+        out.push(relabel(alike, key))
+        continue
+      }
       const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: string[][] }>()
       const own: number[] = []
       const order: string[] = []
-      const items: { lemma: string; inherent: string; forms: string[] }[] = []
-      for (const e of tables) {
+      const items: { lemma: string; inherent: string; forms: string[]; t: number }[] = []
+      for (const [t, e] of tables.entries()) {
         const cell = e.cells!.find((c) => c.key === key)
         if (!cell) continue
         const tp = extractPattern(e.lemma, [cell.forms[0]!])
@@ -80,7 +89,7 @@ export function learnCellRules(
         g.lemmas.push(e.lemma)
         g.stems.push(tp.stems)
         own.push(g.index)
-        items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms })
+        items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms, t })
       }
       const seen = order.map((s, i) => {
         const g = groups.get(s)!
@@ -100,10 +109,12 @@ export function learnCellRules(
       const rules = twinned.paradigms
       const finder = new CandidateFinder(rules, twinned.members, alternations, twinOptions)
       const classOf = twinOptions?.tie ? tiedClasses(rules, alternations) : undefined
-      const picked = sampleByClass(own, ranker.maxExamples ?? 0, ranker.seed)
+      const picked = sampleByClass(own, cellCap(ranker, order.length), ranker.seed)
+      const coder = new ExampleCoder()
       const example = (
         it: { lemma: string; inherent: string; forms: string[] },
         rule: number,
+        local: string[],
       ): RankerExample => {
         const found = finder.find(it.lemma, upos, rule)
         const gold: number[] = []
@@ -111,13 +122,17 @@ export function learnCellRules(
           if (it.forms.includes(fillPattern(rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems))) gold.push(k)
         })
         return {
-          local: lemmaFeatures(it.lemma, it.inherent, features),
+          local,
           candidates: found.map((c) => classOf?.[c.paradigm] ?? c.paradigm),
           shared: found.map((c) => c.shared),
           gold,
         }
       }
-      const examples = picked.map((i) => example(items[i]!, own[i]!))
+      for (const i of picked) {
+        const it = items[i]!
+        localOf[it.t] ??= lemmaFeatures(it.lemma, it.inherent, features)
+        coder.add(example(it, own[i]!, localOf[it.t]!))
+      }
       const swap = alternations[upos]
       if (swap && twinOptions?.mirrorCells) {
         const twinOf = new Map(
@@ -128,38 +143,57 @@ export function learnCellRules(
           const twin = twinOf.get(own[i]!)
           const lemma = mirror(it.lemma, swap)
           if (twin === undefined || lemma === it.lemma) continue
-          examples.push(
-            example({ lemma, inherent: it.inherent, forms: it.forms.map((f) => mirror(f, swap)) }, twin),
-          )
+          mirroredOf[it.t] ??= lemmaFeatures(lemma, it.inherent, features)
+          const copy = { lemma, inherent: it.inherent, forms: it.forms.map((f) => mirror(f, swap)) }
+          coder.add(example(copy, twin, mirroredOf[it.t]!))
         }
       }
-      const sameAs = JSON.stringify(examples)
-      let first = trained.get(sameAs)
-      if (!first) {
-        first = trainRanker(examples, withPrior(ranker, examples.length, prior))
-        trained.set(sameAs, first)
-      }
-      const weights: RankerWeights = { local: first.local, shared: first.shared }
+      const weights = memo.train(coder.done(), withPrior(ranker, coder.added, prior))
       if (classOf) weights.classOf = classOf
-      out.push({ upos, key, rules, weights, finder })
+      const model = { upos, key, rules, weights, finder }
+      bySignature.set(signature, model)
+      out.push(model)
     }
   }
   return out
 }
 
-/** The probability of each form of one cell for a lemma, best first. */
+/** How many tables a cell's ranker trains on at most, given its rule count (0: all). */
+function cellCap(o: RankerOptions, rules: number): number {
+  const max = o.maxExamples ?? 0
+  if (!o.cellPerRule) return max
+  const bound = Math.max(o.cellFloor ?? 0, o.cellPerRule * rules)
+  return max > 0 ? Math.min(max, bound) : bound
+}
+
+/** A cell model under another cell's key: rule ids and cell keys renamed, weight maps and finder shared. */
+function relabel(m: CellRuleModel, key: string): CellRuleModel {
+  const from = `${m.upos}:${m.key}:`
+  const to = `${m.upos}:${key}:`
+  const rules = m.rules.map((r) => ({
+    ...r,
+    id: to + r.id.slice(from.length),
+    cells: r.cells.map((c) => ({ ...c, key })),
+  }))
+  const weights: RankerWeights = { local: m.weights.local, shared: m.weights.shared }
+  if (m.weights.classOf) weights.classOf = [...m.weights.classOf]
+  return { upos: m.upos, key, rules, weights, finder: m.finder }
+}
+
+/** The probability of each form of one cell for a lemma, best first (`local`: the lemma's features, when made already). */
 export function cellFormDistribution(
   m: CellRuleModel,
   lemma: string,
   inherent: string,
   features: FeatureOptions,
+  local: string[] = lemmaFeatures(lemma, inherent, features),
 ): Map<string, number> {
   const found = m.finder.find(lemma, m.upos)
   const dist = new Map<string, number>()
   if (found.length === 0) return dist
   const probs = scoreCandidates(
     m.weights,
-    lemmaFeatures(lemma, inherent, features),
+    local,
     found.map((c) => c.paradigm),
     found.map((c) => c.shared),
   )

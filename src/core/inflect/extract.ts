@@ -1,8 +1,8 @@
 // Paradigm book: every full table becomes an abstract pattern; tables sharing one merge into a paradigm.
 // Pattern extraction follows Ahlberg, Forsberg & Hulden (2014), EACL (longest-common-subsequence paradigms).
 import type { LexEntry, Lexicon } from '../lexicon/lexicon.ts'
-import { applyParadigm, type Paradigm, type ParadigmCell, paradigmShapeKey, type StemShape } from './paradigm.ts'
-import { extractPattern, type Pattern } from './pattern.ts'
+import { matchStems, type Paradigm, type ParadigmCell, paradigmShapeKey, type StemShape } from './paradigm.ts'
+import { extractPattern, fillPattern, type Pattern } from './pattern.ts'
 
 /** A cell present in at least this share of a UPOS's tables belongs to its full inventory (common practice). */
 const FULL_CELL_SHARE = 0.5
@@ -98,15 +98,40 @@ export function extractParadigms(lex: Lexicon): ParadigmBook {
 }
 
 /** Does the paradigm give exactly this entry's forms in every cell the entry has? */
-export function reproduces(p: Pick<Paradigm, 'lemma' | 'openPrefix' | 'cells' | 'shapes'>, entry: LexEntry): boolean {
+export function reproduces(
+  p: Pick<Paradigm, 'lemma' | 'openPrefix' | 'cells' | 'shapes'>,
+  entry: LexEntry,
+): boolean {
   if (!entry.cells) return false
-  const forms = applyParadigm(p, entry.lemma)
-  if (!forms) return false
+  const stems = matchStems(p, entry.lemma)
+  return stems !== null && reproducesWith(p, entry, stems)
+}
+
+const cellIndexes = new WeakMap<readonly ParadigmCell[], Map<string, number>>()
+
+/**
+ * As reproduces, with the stems the paradigm gives the entry's lemma already known (a candidate's): cell by
+ * cell, stopping at the first that differs.
+ * @example reproducesWith(p, entry, finder.find(entry.lemma, entry.upos)[0].stems) // true
+ */
+export function reproducesWith(
+  p: Pick<Paradigm, 'cells'>,
+  entry: LexEntry,
+  stems: readonly string[],
+): boolean {
+  if (!entry.cells) return false
+  let index = cellIndexes.get(p.cells)
+  if (!index) {
+    index = new Map()
+    for (let i = p.cells.length - 1; i >= 0; i--) index.set(p.cells[i]!.key, i)
+    cellIndexes.set(p.cells, index)
+  }
   for (const cell of entry.cells) {
-    const i = p.cells.findIndex((c) => c.key === cell.key)
-    if (i < 0) return false
-    const got = forms[i]!
-    if (got.length !== cell.forms.length || !got.every((f) => cell.forms.includes(f))) return false
+    const i = index.get(cell.key)
+    if (i === undefined) return false
+    const patterns = p.cells[i]!.forms
+    if (patterns.length !== cell.forms.length) return false
+    for (const f of patterns) if (!cell.forms.includes(fillPattern(f, stems))) return false
   }
   return true
 }

@@ -12,7 +12,7 @@ import { CandidateFinder } from './candidates.ts'
 import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import type { CorpusEvidence } from './corpus-evidence.ts'
 import { sampleByClass } from './example-sample.ts'
-import { extractParadigms, type ParadigmBook, reproduces } from './extract.ts'
+import { extractParadigms, type ParadigmBook, reproducesWith } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
 import { withPrior } from './prior.ts'
 import {
@@ -20,8 +20,9 @@ import {
   type RankerExample,
   type RankerOptions,
   type RankerWeights,
-  trainRanker,
 } from './ranker.ts'
+import { ExampleCoder } from './ranker-coding.ts'
+import { trainCoded } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
@@ -119,7 +120,7 @@ export function learnFromLexicon(
     const found = finder.find(e.lemma, e.upos, own)
     const gold: number[] = []
     found.forEach((c, k) => {
-      if (c.paradigm === own || reproduces(book.paradigms[c.paradigm]!, e)) gold.push(k)
+      if (c.paradigm === own || reproducesWith(book.paradigms[c.paradigm]!, e, c.stems)) gold.push(k)
     })
     return {
       local: lemmaFeatures(e.lemma, e.inherent, options.features),
@@ -128,7 +129,8 @@ export function learnFromLexicon(
       gold,
     }
   }
-  const examples = picked.map((t) => example(lexicon.entries[tables[t]!]!, book.memberOf[tables[t]!]!))
+  const coder = new ExampleCoder()
+  for (const t of picked) coder.add(example(lexicon.entries[tables[t]!]!, book.memberOf[tables[t]!]!))
   // A table whose paradigm has a twin, mirrored, is what the twin's members would look like: training on
   // these copies teaches the ranker when a twin applies (they are never entries of the model).
   if (options.twins?.mirrorTables) {
@@ -138,10 +140,10 @@ export function learnFromLexicon(
       const copy = twin === undefined ? null : mirrorEntry(e, alternations[e.upos]!)
       // A copy whose harmony letters the swap left on both sides would contradict the harmony features.
       const consistent = copy && (!options.twins.harmony || finder.oneSide(copy.lemma, copy.upos))
-      if (consistent) examples.push(example(copy, twin!))
+      if (consistent) coder.add(example(copy, twin!))
     }
   }
-  const weights = trainRanker(examples, withPrior(options.ranker, examples.length, options.prior))
+  const weights = trainCoded(coder.done(), withPrior(options.ranker, coder.added, options.prior))
   if (classOf) weights.classOf = classOf
   const cells =
     options.combine.cellWeight > 0 || options.combine.cellMix > 0

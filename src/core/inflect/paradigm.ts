@@ -58,39 +58,72 @@ const MAX_MATCHES = 64
  * @example matchAll([0, 'a', 1], false, 'Kanal') // [['Kan', 'l'], ['K', 'nal']]
  */
 export function matchAll(lemma: Pattern, openPrefix: boolean, word: string): string[][] {
-  const out: string[][] = []
-  const stems: string[] = []
+  const single = matchSingle(lemma, openPrefix, word)
+  if (single !== undefined) return single
+  const search: Search = { lemma, openPrefix, word, out: [], stems: [], dead: null }
+  step(search, 0, 0)
+  return search.out
+}
+
+/** The state of one matchAll search. */
+interface Search {
+  lemma: Pattern
+  openPrefix: boolean
+  word: string
+  out: string[][]
+  stems: string[]
+  /** (part, position) pairs known to lead to no match: without this, many adjacent variables are exponential. */
+  dead: Set<number> | null
+}
+
+function step(s: Search, part: number, pos: number): void {
+  const { lemma, word, out, stems } = s
   const n = word.length
-  // (part, position) pairs known to lead to no match: without this, many adjacent variables are exponential.
-  const dead = new Set<number>()
-  const step = (part: number, pos: number): void => {
-    if (out.length >= MAX_MATCHES) return
-    const state = part * (n + 1) + pos
-    if (dead.has(state)) return
-    const before = out.length
-    if (part === lemma.length) {
-      if (pos === n) out.push(stems.slice())
+  if (out.length >= MAX_MATCHES) return
+  const state = part * (n + 1) + pos
+  if (s.dead?.has(state)) return
+  const before = out.length
+  if (part === lemma.length) {
+    if (pos === n) out.push(stems.slice())
+  } else {
+    const p = lemma[part]!
+    if (typeof p === 'string') {
+      if (word.startsWith(p, pos)) step(s, part + 1, pos + p.length)
     } else {
-      const p = lemma[part]!
-      if (typeof p === 'string') {
-        if (word.startsWith(p, pos)) step(part + 1, pos + p.length)
-      } else {
-        const min = p === 0 && openPrefix ? 0 : 1
-        // A variable followed by a literal can only end where that literal starts.
-        const next = lemma[part + 1]
-        for (let end = n; end >= pos + min; end--) {
-          if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
-          if (typeof next === 'string' && !word.startsWith(next, end)) continue
-          if (next === undefined && end !== n) continue
-          stems[p] = word.slice(pos, end)
-          step(part + 1, end)
-        }
+      const min = p === 0 && s.openPrefix ? 0 : 1
+      // A variable followed by a literal can only end where that literal starts.
+      const next = lemma[part + 1]
+      for (let end = n; end >= pos + min; end--) {
+        if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
+        if (typeof next === 'string' && !word.startsWith(next, end)) continue
+        if (next === undefined && end !== n) continue
+        stems[p] = word.slice(pos, end)
+        step(s, part + 1, end)
       }
     }
-    if (out.length === before) dead.add(state)
   }
-  step(0, 0)
-  return out
+  if (out.length === before) (s.dead ??= new Set()).add(state)
+}
+
+/**
+ * matchAll for a pattern with one variable (most rules): literal, variable, literal — one match at most, so
+ * no search. Undefined for other patterns.
+ */
+function matchSingle(lemma: Pattern, openPrefix: boolean, word: string): string[][] | undefined {
+  let at = -1
+  for (let i = 0; i < lemma.length; i++) {
+    if (typeof lemma[i] !== 'number') continue
+    if (at >= 0) return undefined
+    at = i
+  }
+  if (at < 0 || lemma[at] !== 0 || lemma.length > at + 2 || at > 1) return undefined
+  const before = at === 1 ? (lemma[0] as string) : ''
+  const after = at + 1 < lemma.length ? (lemma[at + 1] as string) : ''
+  const end = word.length - after.length
+  const min = openPrefix ? 0 : 1
+  if (end < before.length + min || !word.startsWith(before) || !word.endsWith(after)) return []
+  if (end < word.length && isHighSurrogate(word.charCodeAt(end - 1))) return []
+  return [[word.slice(before.length, end)]]
 }
 
 function isHighSurrogate(c: number): boolean {

@@ -131,9 +131,14 @@ function corpusWeighted(
 function cellDistributions(model: InflectionModel, lemma: string, upos: string, inherent: string): Map<string, Map<string, number>> {
   const dists = new Map<string, Map<string, number>>()
   if (model.options.combine.cellWeight <= 0 && model.options.combine.cellMix <= 0) return dists
+  const local = lemmaFeatures(lemma, inherent, model.options.features)
+  // Syncretic cells learned as one share their finder (see cell-rules.ts): one distribution serves them all.
+  const byFinder = new Map<object, Map<string, number>>()
   for (const m of model.cells) {
     if (m.upos !== upos) continue
-    const d = cellFormDistribution(m, lemma, inherent, model.options.features)
+    const known = byFinder.get(m.finder)
+    const d = known ? new Map(known) : cellFormDistribution(m, lemma, inherent, model.options.features, local)
+    if (!known) byFinder.set(m.finder, d)
     if (d.size > 0) dists.set(m.key, d)
   }
   return dists

@@ -39,8 +39,19 @@ export class SuffixIndex {
     word: string,
     exclude: boolean | string,
   ): { length: number; count: number; wholeMember: boolean } {
-    const chars = [...word]
-    const out = exclude === true ? chars : typeof exclude === 'string' ? [...exclude] : null
+    return this.longestSharedCodes(codePoints(word), typeof exclude === 'string' ? codePoints(exclude) : exclude)
+  }
+
+  /**
+   * As longestShared, given the word's code points (made once for many indexes); `exclude` true, false, or
+   * the code points of the other member left out.
+   * @example idx.longestSharedCodes(codePoints('aasfliege'), false).length // 6
+   */
+  longestSharedCodes(
+    chars: readonly number[],
+    exclude: boolean | readonly number[],
+  ): { length: number; count: number; wholeMember: boolean } {
+    const out = exclude === true ? chars : exclude === false ? null : exclude
     let node = 0
     let length = 0
     let count = this.counts[0]! - (out ? 1 : 0)
@@ -48,7 +59,7 @@ export class SuffixIndex {
     // The excluded member shares the path while its letters from the end are the word's.
     let onPath = out !== null
     for (let i = chars.length - 1; i >= 0; i--) {
-      const next = this.edges.get(node * CODE_SPAN + chars[i]!.codePointAt(0)!)
+      const next = this.edges.get(node * CODE_SPAN + chars[i]!)
       if (next === undefined) break
       const d = chars.length - 1 - i
       onPath = onPath && d < out!.length && out![out!.length - 1 - d] === chars[i]
@@ -62,4 +73,14 @@ export class SuffixIndex {
     }
     return { length, count, wholeMember }
   }
+}
+
+/**
+ * The code points of a word, one per letter.
+ * @example codePoints('aß') // [97, 223]
+ */
+export function codePoints(word: string): number[] {
+  const out: number[] = []
+  for (const c of word) out.push(c.codePointAt(0)!)
+  return out
 }

@@ -1,6 +1,6 @@
 // The lexicon: entries merged by (lemma, upos), cells split from inherent features, cell inventories per UPOS.
 import { type Entry, entryKey } from './entry.ts'
-import { compareFeatureKeys, formatFeats, mergeFeats, parseFeats, pickFeats } from './feats.ts'
+import { compareFeatureKeys, type FeatMap, formatFeats, mergeFeats, parseFeats, pickFeats } from './feats.ts'
 import type { Problem } from './problem.ts'
 
 /** One cell of a table: its cell FEATS (inflectional features only) and its forms (variants in input order). */
@@ -41,6 +41,26 @@ export interface Lexicon {
  */
 export function buildLexicon(input: Iterable<Entry>): Lexicon {
   const problems: Problem[] = []
+  // Bundles repeat in every table: each is parsed once (the maps are shared, so only read), and so is each
+  // merge of an entry's features with a row's and each row bundle's cell key.
+  const parsed = new Map<string, FeatMap>()
+  const parse = (f: string): FeatMap => {
+    let m = parsed.get(f)
+    if (!m) {
+      m = parseFeats(f)
+      parsed.set(f, m)
+    }
+    return m
+  }
+  const memo = new Map<string, string>()
+  const cached = (key: string, make: () => string): string => {
+    let v = memo.get(key)
+    if (v === undefined) {
+      v = make()
+      memo.set(key, v)
+    }
+    return v
+  }
   const merged = new Map<string, { entry: Entry; rows: { form: string; feats: string }[]; tables: number }>()
   for (const e of input) {
     const key = entryKey(e.lemma, e.upos)
@@ -62,7 +82,13 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
       }
     }
     if (e.forms) {
-      const full = e.forms.map((f) => ({ form: f.form, feats: mergeFeats(e.feats, f.feats) }))
+      const full = e.forms.map((f) => ({
+        form: f.form,
+        feats:
+          e.feats === '_'
+            ? mergeFeats(e.feats, f.feats)
+            : cached(`m\u0000${e.feats}\u0000${f.feats}`, () => mergeFeats(e.feats, f.feats)),
+      }))
       if (m.tables > 0 && e.line !== undefined && !sameRows(m.rows, full)) {
         problems.push({
           code: 'conflict',
@@ -82,11 +108,11 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
     if (rows.length === 0) continue
     const set = varying.get(entry.upos) ?? new Set<string>()
     varying.set(entry.upos, set)
-    const maps = rows.map((r) => parseFeats(r.feats))
+    const maps = rows.map((r) => parse(r.feats))
     const names = new Set(maps.flatMap((m) => Object.keys(m)))
     for (const n of names) {
-      const first = maps[0]![n]?.join(',')
-      if (maps.some((m) => m[n]?.join(',') !== first)) set.add(n)
+      const first = maps[0]![n]
+      if (maps.some((m) => !sameValues(m[n], first))) set.add(n)
     }
   }
 
@@ -98,21 +124,23 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
       entries.push({ lemma: entry.lemma, upos: entry.upos, inherent: entry.feats, cells: null })
       continue
     }
-    let inherent = parseFeats(entry.feats)
-    const maps = rows.map((r) => parseFeats(r.feats))
+    let inherent = parse(entry.feats)
+    const maps = rows.map((r) => parse(r.feats))
     for (const n of Object.keys(maps[0]!)) {
       if (infl.has(n)) continue
-      const val = maps[0]![n]!.join(',')
-      if (maps.every((m) => m[n]?.join(',') === val)) inherent = { ...inherent, [n]: maps[0]![n]! }
+      const val = maps[0]![n]!
+      if (maps.every((m) => sameValues(m[n], val))) inherent = { ...inherent, [n]: maps[0]![n]! }
     }
     const inherentNames = new Set(Object.keys(inherent))
+    const keySig = `k\u0000${entry.upos}\u0000${[...inherentNames].join('|')}\u0000`
     const cells: Cell[] = []
     const index = new Map<string, Cell>()
     const keys = (cellKeys[entry.upos] ??= [])
     for (const r of rows) {
-      const map = parseFeats(r.feats)
-      const keep = new Set(Object.keys(map).filter((n) => !inherentNames.has(n) || infl.has(n)))
-      const key = pickFeats(r.feats, keep)
+      const key = cached(keySig + r.feats, () => {
+        const keep = new Set(Object.keys(parse(r.feats)).filter((n) => !inherentNames.has(n) || infl.has(n)))
+        return pickFeats(r.feats, keep)
+      })
       let cell = index.get(key)
       if (!cell) {
         cell = { key, forms: [] }
@@ -135,6 +163,14 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
   for (const upos of [...varying.keys()].sort(cmp))
     inflectional[upos] = [...varying.get(upos)!].sort(compareFeatureKeys)
   return { entries, cellKeys: sortedCellKeys, inflectional, problems }
+}
+
+/** Whether two feature values lists are the same (both absent counts as the same). */
+function sameValues(a: readonly string[] | undefined, b: readonly string[] | undefined): boolean {
+  if (a === b) return true
+  if (!a || !b || a.length !== b.length) return false
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false
+  return true
 }
 
 function cmp(a: string, b: string): number {

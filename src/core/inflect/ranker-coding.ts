@@ -1,0 +1,162 @@
+// Ranker examples coded for training: feature strings become integer ids, and every candidate's weight slots
+// and shared features lie in one flat Int32Array, so the training epochs touch no strings, maps or objects.
+import type { RankerExample } from './ranker.ts'
+
+/** The trainable examples (≥ 2 candidates, ≥ 1 gold) of a training set, flat. */
+export interface CodedExamples {
+  /** Example e's candidates are candidates start[e] … start[e + 1] - 1 (global candidate numbers). */
+  start: Int32Array
+  /** Example e's number of local features. */
+  width: Int32Array
+  /** Candidate c's ids are ids[candStart[c]] …: its local weight slots (width of its example), then shared ids. */
+  candStart: Int32Array
+  ids: Int32Array
+  /** 1 where the candidate is correct. */
+  gold: Uint8Array
+  maxCandidates: number
+  /** Weight slot s belongs to (local feature pairFeature[s], class pairClass[s]). */
+  pairCount: number
+  pairFeature: Int32Array
+  pairClass: Int32Array
+  localNames: string[]
+  sharedNames: string[]
+}
+
+/** A growable Int32Array. */
+class IntList {
+  data = new Int32Array(1024)
+  length = 0
+  push(v: number): void {
+    if (this.length === this.data.length) {
+      const next = new Int32Array(this.data.length * 2)
+      next.set(this.data)
+      this.data = next
+    }
+    this.data[this.length++] = v
+  }
+  done(): Int32Array {
+    return this.data.slice(0, this.length)
+  }
+}
+
+/** (feature id, class) → weight slot, by open addressing (a Map keyed by a combined number is far slower). */
+class PairSlots {
+  private keysF = new Int32Array(1 << 12).fill(-1)
+  private keysC = new Int32Array(1 << 12)
+  private values = new Int32Array(1 << 12)
+  readonly feature = new IntList()
+  readonly cls = new IntList()
+
+  slot(f: number, c: number): number {
+    let mask = this.keysF.length - 1
+    let h = (Math.imul(f, 0x9e3779b1) ^ Math.imul(c, 0x85ebca77)) & mask
+    while (this.keysF[h] !== -1) {
+      if (this.keysF[h] === f && this.keysC[h] === c) return this.values[h]!
+      h = (h + 1) & mask
+    }
+    const s = this.feature.length
+    this.feature.push(f)
+    this.cls.push(c)
+    if (2 * (s + 1) > this.keysF.length) {
+      this.grow()
+      mask = this.keysF.length - 1
+      h = (Math.imul(f, 0x9e3779b1) ^ Math.imul(c, 0x85ebca77)) & mask
+      while (this.keysF[h] !== -1) h = (h + 1) & mask
+    }
+    this.keysF[h] = f
+    this.keysC[h] = c
+    this.values[h] = s
+    return s
+  }
+
+  private grow(): void {
+    const size = this.keysF.length * 2
+    const mask = size - 1
+    const kf = new Int32Array(size).fill(-1)
+    const kc = new Int32Array(size)
+    const vs = new Int32Array(size)
+    for (let s = 0; s < this.feature.length - 1; s++) {
+      const f = this.feature.data[s]!
+      const c = this.cls.data[s]!
+      let h = (Math.imul(f, 0x9e3779b1) ^ Math.imul(c, 0x85ebca77)) & mask
+      while (kf[h] !== -1) h = (h + 1) & mask
+      kf[h] = f
+      kc[h] = c
+      vs[h] = s
+    }
+    this.keysF = kf
+    this.keysC = kc
+    this.values = vs
+  }
+}
+
+/**
+ * Codes the trainable examples of one training set as they are made (fewer than two candidates or no gold
+ * one: nothing to learn, left out), so their feature strings need not outlive them.
+ * @example const c = new ExampleCoder(); c.add({ local: ['b'], candidates: [3, 7], shared: [['x'], ['y']], gold: [0] }); c.done().pairCount // 2
+ */
+export class ExampleCoder {
+  private readonly localIds = new Map<string, number>()
+  private readonly sharedIds = new Map<string, number>()
+  private readonly pairs = new PairSlots()
+  private readonly start = new IntList()
+  private readonly width = new IntList()
+  private readonly candStart = new IntList()
+  private readonly ids = new IntList()
+  private readonly gold = new IntList()
+  private readonly local: number[] = []
+  private maxCandidates = 0
+  /** Examples given, the ones left out included (the training-set size an L2 prior is spread over). */
+  added = 0
+
+  /** Code one example. */
+  add(ex: RankerExample): void {
+    this.added++
+    if (ex.candidates.length < 2 || ex.gold.length === 0) return
+    const n = ex.candidates.length
+    if (n > this.maxCandidates) this.maxCandidates = n
+    const { local, ids, gold } = this
+    this.start.push(this.candStart.length)
+    this.width.push(ex.local.length)
+    local.length = 0
+    for (const f of ex.local) local.push(intern(this.localIds, f))
+    const g0 = gold.length
+    for (let i = 0; i < n; i++) gold.push(0)
+    for (const g of ex.gold) gold.data[g0 + g] = 1
+    // (Slot numbers only name weights: the trained weights come out in (feature, class) order whatever they are.)
+    for (let i = 0; i < n; i++) {
+      this.candStart.push(ids.length)
+      const c = ex.candidates[i]!
+      for (let j = 0; j < local.length; j++) ids.push(this.pairs.slot(local[j]!, c))
+      for (const f of ex.shared[i]!) ids.push(intern(this.sharedIds, f))
+    }
+  }
+
+  /** The coded examples (the coder is not to be used after). */
+  done(): CodedExamples {
+    this.start.push(this.candStart.length)
+    this.candStart.push(this.ids.length)
+    return {
+      start: this.start.done(),
+      width: this.width.done(),
+      candStart: this.candStart.done(),
+      ids: this.ids.done(),
+      gold: Uint8Array.from(this.gold.done()),
+      maxCandidates: this.maxCandidates,
+      pairCount: this.pairs.feature.length,
+      pairFeature: this.pairs.feature.done(),
+      pairClass: this.pairs.cls.done(),
+      localNames: [...this.localIds.keys()],
+      sharedNames: [...this.sharedIds.keys()],
+    }
+  }
+}
+
+function intern(m: Map<string, number>, k: string): number {
+  let v = m.get(k)
+  if (v === undefined) {
+    v = m.size
+    m.set(k, v)
+  }
+  return v
+}
