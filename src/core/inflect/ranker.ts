@@ -33,8 +33,10 @@ export interface RankerOptions {
   /**
    * A cell's rule ranker trains on at most max(`cellFloor`, `cellPerRule` × its rule count) examples (and
    * `maxExamples`); absent or 0: no such bound. A cell with few rules learns its choice from far fewer
-   * tables than the cap: 100 and 1000 were identical or better on DDN13 dev (de-noun 0.775 → 0.780 table)
-   * and within one lemma on the npm German nouns, at a fraction of the training.
+   * tables than the cap, and this is a saving for large lexicons only: with a floor of 1,000 the DDN13 dev
+   * figures were within a lemma (de-noun 0.775 → 0.780), but a 2,364-table set then learned most cells from
+   * fewer than half its tables, so the floor is 3,000, the size from which the other large-lexicon
+   * approximations (`supportFrom`, `pruneFrom`) apply too: below it every table counts.
    */
   cellPerRule?: number
   cellFloor?: number
@@ -74,7 +76,7 @@ export const DEFAULT_RANKER_OPTIONS: RankerOptions = {
   seed: 1,
   maxExamples: 6000,
   cellPerRule: 100,
-  cellFloor: 1000,
+  cellFloor: 3000,
   prune: 0.06,
   pruneFrom: 3000,
   support: 'gold',
