@@ -45,14 +45,22 @@ function namesOf(json: WeightsJson, names: readonly string[] | undefined): strin
  * Round every weight to `decimals` places and drop those that become 0 (they change nothing).
  * @example roundWeights({ local: new Map([['b\u00003', 0.123456]]), shared: new Map() }, 4).local.get('b\u00003') // 0.1235
  */
-export function roundWeights(w: RankerWeights, decimals: number): RankerWeights {
+export function roundWeights(
+  w: RankerWeights,
+  decimals: number,
+  done: Map<Map<string, number>, Map<string, number>> = new Map(),
+): RankerWeights {
   const scale = 10 ** decimals
+  // Cells that share a weights map (see cell-rules.ts) share its rounded copy too: rounded once.
   const round = (m: Map<string, number>) => {
+    const seen = done.get(m)
+    if (seen) return seen
     const out = new Map<string, number>()
     for (const [k, v] of m) {
       const r = Math.round(v * scale)
       if (r !== 0) out.set(k, r / scale)
     }
+    done.set(m, out)
     return out
   }
   return { ...w, local: round(w.local), shared: round(w.shared) }
@@ -63,10 +71,11 @@ export function roundWeights(w: RankerWeights, decimals: number): RankerWeights 
  * @example roundModelWeights(learned, 3).weights.local.size <= learned.weights.local.size // true
  */
 export function roundModelWeights(m: InflectionModel, decimals: number): InflectionModel {
+  const done = new Map<Map<string, number>, Map<string, number>>()
   return {
     ...m,
     weights: roundWeights(m.weights, decimals),
-    cells: m.cells.map((c) => ({ ...c, weights: roundWeights(c.weights, decimals) })),
+    cells: m.cells.map((c) => ({ ...c, weights: roundWeights(c.weights, decimals, done) })),
   }
 }
 
