@@ -2,7 +2,8 @@
 // table rows, growth over sample fractions, and the model at the largest size (lemmas, forms, bytes, load time).
 // A seeded, evenly spread sample of the lemmas is used when all of them take too long (--lemmas N; 0 = all).
 // Every fifth sampled lemma becomes a lemma-only entry, so the model holds predicted tables too.
-// Run: npx tsx bench/scale-learn.ts -- [--lemmas 3000] [--fractions 0.1,0.3,1] [--save MODEL.json] [--json]
+// Run: npx tsx bench/scale-learn.ts -- [--lemmas 3000] [--fractions 0.1,0.3,1] [--save MODEL.json[.gz]] [--json]
+// All lemmas (--lemmas 0) need a larger heap: node --max-old-space-size=16000 --import tsx bench/scale-learn.ts …
 import { writeFileSync } from 'node:fs'
 import { Readable } from 'node:stream'
 import { fileURLToPath } from 'node:url'
@@ -11,6 +12,7 @@ import { type Entry, rowsToEntries } from '../src/core/lexicon/entry.ts'
 import { buildModel } from '../src/core/model/build-model.ts'
 import { decodeModel } from '../src/core/model/decode-model.ts'
 import { encodeModel } from '../src/core/model/encode-model.ts'
+import { gzipModelText } from '../src/cli/model-file.ts'
 import { readLexicon } from '../src/formats/index.ts'
 import { loadGermanNpm } from '../test/support/german-npm.ts'
 
@@ -23,7 +25,10 @@ export interface LearnPoint {
   parseSeconds: number
   learnSeconds: number
   forms: number
+  /** The model file as JSON. */
   modelBytes: number
+  /** The same file gzip-compressed, as `formfold learn -o model.json.gz` writes it. */
+  gzipBytes: number
   loadSeconds: number
 }
 
@@ -61,7 +66,8 @@ export async function measureLearn(entries: Entry[], fraction: number, save?: st
   const model = buildModel([...read.entries, ...lemmaOnly])
   const learnSeconds = (performance.now() - t) / 1000
   const encoded = encodeModel(model)
-  if (save) writeFileSync(save, encoded)
+  const packed = gzipModelText(encoded)
+  if (save) writeFileSync(save, save.endsWith('.gz') ? packed : encoded)
   t = performance.now()
   const decoded = decodeModel(encoded)
   const loadSeconds = (performance.now() - t) / 1000
@@ -74,6 +80,7 @@ export async function measureLearn(entries: Entry[], fraction: number, save?: st
     learnSeconds,
     forms: [...decoded.index.forms()].length,
     modelBytes: Buffer.byteLength(encoded),
+    gzipBytes: packed.byteLength,
     loadSeconds,
   }
 }
@@ -85,7 +92,7 @@ export async function measureGrowth(lemmas: number, fractions: number[], save?: 
   for (const f of fractions) {
     const p = await measureLearn(entries, f, f === fractions.at(-1) ? save : undefined)
     process.stderr.write(
-      `learn ${(f * 100).toFixed(0)}% (${p.lemmas} lemmas, ${p.tables} tables, ${p.rows} rows): parse ${p.parseSeconds.toFixed(3)} s, learn ${p.learnSeconds.toFixed(1)} s; ${p.forms} forms, ${p.modelBytes} bytes, load ${p.loadSeconds.toFixed(2)} s\n`,
+      `learn ${(f * 100).toFixed(0)}% (${p.lemmas} lemmas, ${p.tables} tables, ${p.rows} rows): parse ${p.parseSeconds.toFixed(3)} s, learn ${p.learnSeconds.toFixed(1)} s; ${p.forms} forms, ${p.modelBytes} bytes (${p.gzipBytes} gzip), load ${p.loadSeconds.toFixed(2)} s\n`,
     )
     points.push(p)
   }

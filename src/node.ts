@@ -1,7 +1,7 @@
 // The Node entry point: the same app on 127.0.0.1 through @hono/node-server, models embedded or from a file.
-import { readFile } from 'node:fs/promises'
 import { basename } from 'node:path'
 import { type ServerType, serve } from '@hono/node-server'
+import { readModelText } from './cli/model-file.ts'
 import { ProblemError } from './core/lexicon/problem.ts'
 import { readModel } from './core/model/decode-model.ts'
 import { createApp } from './http/app.ts'
@@ -36,6 +36,7 @@ export interface NodeServer {
 export function modelNameOf(path: string): string {
   const name = basename(path)
     .toLowerCase()
+    .replace(/\.gz$/, '')
     .replace(/\.json$/, '')
     .replace(/\.model$/, '')
     .replace(/[^a-z0-9._-]+/g, '-')
@@ -50,12 +51,7 @@ export async function startNodeServer(options: NodeServerOptions): Promise<NodeS
   const embedded: EmbeddedModel<ServedModel>[] = [demoModel]
   let defaultName = demoModel.name
   if (options.modelFile) {
-    let text: string
-    try {
-      text = await readFile(options.modelFile, 'utf8')
-    } catch {
-      throw new ProblemError({ code: 'unreadable-file', file: options.modelFile, message: 'cannot read the model file' })
-    }
+    const text = await readModelText(options.modelFile)
     const read = readModel(text)
     if (!read.ok) throw new ProblemError({ ...read.problem, file: options.modelFile })
     const model = read.model

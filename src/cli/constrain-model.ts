@@ -1,6 +1,5 @@
 // The model as `formfold constrain` uses it: a name and version for the header, an analyzer, its forms.
 import { createHash } from 'node:crypto'
-import { readFile } from 'node:fs/promises'
 import { basename } from 'node:path'
 import type { Analyzer } from '../core/constrain/index.ts'
 import { type AnalyzeOptions, analyzeForm } from '../core/lookup/analyze.ts'
@@ -8,6 +7,7 @@ import { readModel } from '../core/model/decode-model.ts'
 import { ProblemError } from '../core/lexicon/problem.ts'
 import { MODEL_VERSION } from '../core/model/encode-model.ts'
 import { EXIT } from './io.ts'
+import { readModelText } from './model-file.ts'
 
 /** What the command needs of a model file. */
 export interface ConstrainModel {
@@ -26,9 +26,9 @@ export interface ConstrainModel {
 export async function loadConstrainModel(path: string, lookup: AnalyzeOptions = {}): Promise<ConstrainModel> {
   let text: string
   try {
-    text = await readFile(path, 'utf8')
-  } catch {
-    process.stderr.write(`formfold constrain: ${path}: cannot read the model file\n`)
+    text = await readModelText(path)
+  } catch (err) {
+    process.stderr.write(`formfold constrain: ${(err as Error).message}\n`)
     process.exit(EXIT.badInput)
   }
   const read = readModel(text)
@@ -38,6 +38,7 @@ export async function loadConstrainModel(path: string, lookup: AnalyzeOptions = 
   const version = /"version"\s*:\s*"([^"]*)"/.exec(text.slice(0, 500))?.[1] ?? MODEL_VERSION
   return {
     name: basename(path)
+      .replace(/\.gz$/i, '')
       .replace(/\.json$/i, '')
       .replace(/\.model$/i, ''),
     version,

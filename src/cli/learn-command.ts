@@ -5,13 +5,14 @@ import { buildModel, corpusChangedLemmas } from '../core/model/build-model.ts'
 import { encodeModel } from '../core/model/encode-model.ts'
 import { countCorpusForms } from './corpus-counts.ts'
 import { readSources, reportSkipped, runCommand, writeAtomic } from './io.ts'
+import { modelFileBytes } from './model-file.ts'
 
 export function registerLearn(program: Command): void {
   program
     .command('learn')
     .description('learn paradigms from the tables of the sources; predict tables for lemma-only entries')
     .argument('<sources...>', 'table rows (.tsv), entries (.jsonl) or lemma lists (.tsv, 2-3 columns)')
-    .requiredOption('-o, --output <model>', 'model file to write (written atomically)')
+    .requiredOption('-o, --output <model>', 'model file to write (written atomically; gzip-compressed when it ends in .gz)')
     .option('--skip-bad', 'count bad lines (first few shown) instead of stopping at the first')
     .option('--corpus <files...>', 'raw text or CoNLL-U whose forms help choose between candidate tables')
     .action((sources: string[], opts: { output: string; skipBad?: boolean; corpus?: string[] }) =>
@@ -21,7 +22,8 @@ export function registerLearn(program: Command): void {
         const corpus = opts.corpus ? await countCorpusForms(opts.corpus, { skipBad: Boolean(opts.skipBad) }) : undefined
         const model = buildModel(read.entries, {}, corpus)
         const text = encodeModel(model)
-        await writeAtomic(opts.output, text)
+        const bytes = modelFileBytes(opts.output, text)
+        await writeAtomic(opts.output, bytes)
         const lex = model.inflection.lexicon
         const tables = lex.entries.filter((e) => e.cells).length
         const learnedParadigms = model.inflection.book.paradigms.filter((p) => p.twinOf === undefined).length
@@ -33,7 +35,7 @@ export function registerLearn(program: Command): void {
         process.stderr.write(
           `learned ${learnedParadigms} paradigms${twins > 0 ? ` (and ${twins} letter-alternation twins)` : ''} from ${tables} tables; ` +
             `${predicted} lemma-only entries got predicted tables${unfit > 0 ? ` (${unfit} fit no learned paradigm)` : ''}; ` +
-            `${forms} forms indexed; ${Buffer.byteLength(text)} bytes → ${opts.output} in ${seconds} s\n`,
+            `${forms} forms indexed; ${bytes.byteLength} bytes${bytes.byteLength < text.length ? ` (${Buffer.byteLength(text)} as JSON)` : ''} → ${opts.output} in ${seconds} s\n`,
         )
         if (corpus) {
           process.stderr.write(

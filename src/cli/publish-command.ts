@@ -1,5 +1,4 @@
 // `formfold publish -m MODEL --name NAME`: a new model version, to local R2 (wrangler's local state) or to a service.
-import { readFile } from 'node:fs/promises'
 import type { Command } from 'commander'
 import { decodeModel } from '../core/model/decode-model.ts'
 import { type ShardedModelFiles, shardModel } from '../core/model/shard-model.ts'
@@ -10,6 +9,7 @@ import { modelCodec } from '../http/served-model.ts'
 import { ModelStore, type VersionInfo } from '../http/store/model-store.ts'
 import { R2BlobStore } from '../http/store/r2-blob-store.ts'
 import { EXIT, runCommand } from './io.ts'
+import { readModelText } from './model-file.ts'
 
 interface PublishOptions {
   model: string
@@ -94,9 +94,9 @@ async function publish(o: PublishOptions): Promise<void> {
   }
   let bytes: Uint8Array
   try {
-    bytes = new Uint8Array(await readFile(o.model))
-  } catch {
-    process.stderr.write(`formfold publish: ${o.model}: cannot read the model file\n`)
+    bytes = new TextEncoder().encode(await readModelText(o.model)) // the service stores the JSON
+  } catch (err) {
+    process.stderr.write(`formfold publish: ${(err as Error).message}\n`)
     process.exit(EXIT.badInput)
   }
   const sharded = o.shardBudget === undefined ? undefined : await shardFiles(bytes, o)
