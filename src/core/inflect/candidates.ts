@@ -22,8 +22,7 @@ const suffixIndexes = new WeakMap<readonly string[], SuffixIndex>()
 function suffixIndexOf(members: readonly string[]): SuffixIndex {
   let idx = suffixIndexes.get(members)
   if (!idx) {
-    idx = new SuffixIndex()
-    for (const m of members) idx.add(m.toLowerCase())
+    idx = new SuffixIndex(members.map((m) => m.toLowerCase()))
     suffixIndexes.set(members, idx)
   }
   return idx

@@ -10,9 +10,7 @@ import { rowsToEntries } from '../../../src/core/lexicon/entry.ts'
 import { buildLexicon } from '../../../src/core/lexicon/lexicon.ts'
 
 describe('SuffixIndex.longestShared leaving a member out', () => {
-  const idx = new SuffixIndex()
-  idx.add('äväin')
-  idx.add('pelin')
+  const idx = new SuffixIndex(['äväin', 'pelin'])
 
   it('counts the left-out member only where its letters follow the word', () => {
     expect(idx.longestShared('avain', false)).toEqual({ length: 2, count: 2, wholeMember: false })
