@@ -21,7 +21,8 @@ export const MODEL_MEDIA_TYPES: readonly string[] = [MODEL_MEDIA_TYPE, 'applicat
  */
 export function summarizeModel(model: Model): ModelSummary {
   const entries = model.inflection.lexicon.entries
-  const tables = entries.reduce((n, e) => n + (e.cells ? 1 : 0), 0)
+  // An entry has its own table exactly when it keeps no predicted ones (read without decoding any table).
+  const tables = model.kept.reduce((n, k) => n + (k === null ? 1 : 0), 0)
   return {
     lemmas: entries.length,
     tables,

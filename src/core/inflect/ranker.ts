@@ -2,6 +2,7 @@
 // plus weights shared by all classes (analogy strength, stem fit), trained by AdaGrad on the
 // log-likelihood of the set of classes that are correct (several may be: their probabilities add up);
 // training is in ranker-train.ts.
+import { FeatureIndex } from './feature-index.ts'
 
 /** One training item: candidate classes, their shared features, and which candidates are correct. */
 export interface RankerExample {
@@ -99,18 +100,23 @@ export function scoreCandidates(
   const s = new Float64Array(n)
   const cls = w.classOf ? candidates.map((c) => w.classOf![c] ?? c) : candidates
   const at = positionsByClass(cls)
+  const { start, cls: classOfWeight, weight } = byFeature
   for (const f of local) {
-    const classes = byFeature.get(f)
-    if (!classes) continue
+    const slot = byFeature.slot.get(f)
+    if (slot === undefined) continue
+    const from = start[slot]!
+    const to = start[slot + 1]!
     // Whichever is fewer: the feature's classes, or the candidates (each score still sums in feature order).
-    if (classes.size < n) {
-      for (const [c, v] of classes) {
+    if (to - from < n) {
+      for (let k = from; k < to; k++) {
+        const c = classOfWeight[k]!
         if (c >= at.stamp.length || at.stamp[c] !== at.call) continue
+        const v = weight[k]!
         for (let i = at.head[c]!; i >= 0; i = at.next[i]!) s[i]! += v
       }
     } else {
       for (let i = 0; i < n; i++) {
-        const v = classes.get(cls[i]!)
+        const v = byFeature.weightOf(slot, cls[i]!)
         if (v !== undefined) s[i]! += v
       }
     }
@@ -145,20 +151,20 @@ function positionsByClass(cls: readonly number[]): typeof scratch {
   return at
 }
 
-const featureIndexes = new WeakMap<Map<string, number>, Map<string, Map<number, number>>>()
-const featureIndexSources = new WeakMap<Map<string, number>, () => Map<string, Map<number, number>>>()
+const featureIndexes = new WeakMap<Map<string, number>, FeatureIndex>()
+const featureIndexSources = new WeakMap<Map<string, number>, () => FeatureIndex>()
 
 /**
  * Say how to build the feature index of a weights map without reading the map (a model file's weights are
  * stored feature by feature, so its reader can build it directly and leave the map itself undecoded).
- * @example provideFeatureIndex(w.local, () => new Map([['s1:e', new Map([[3, 0.5]])]]))
+ * @example provideFeatureIndex(w.local, () => FeatureIndex.fromGroups([['s1:e', [[3, 0.5]]]]))
  */
-export function provideFeatureIndex(local: Map<string, number>, build: () => Map<string, Map<number, number>>): void {
+export function provideFeatureIndex(local: Map<string, number>, build: () => FeatureIndex): void {
   featureIndexSources.set(local, build)
 }
 
 /** `w.local` regrouped as feature → class → weight (built once per weights map, then reused). */
-function featureIndex(w: RankerWeights): Map<string, Map<number, number>> {
+function featureIndex(w: RankerWeights): FeatureIndex {
   let index = featureIndexes.get(w.local)
   if (index) return index
   const source = featureIndexSources.get(w.local)
@@ -167,17 +173,18 @@ function featureIndex(w: RankerWeights): Map<string, Map<number, number>> {
     featureIndexes.set(w.local, index)
     return index
   }
-  index = new Map()
+  const groups = new Map<string, [number, number][]>()
   for (const [key, v] of w.local) {
     const cut = key.lastIndexOf('\u0000')
     const f = key.slice(0, cut)
-    let classes = index.get(f)
+    let classes = groups.get(f)
     if (!classes) {
-      classes = new Map()
-      index.set(f, classes)
+      classes = []
+      groups.set(f, classes)
     }
-    classes.set(Number(key.slice(cut + 1)), v)
+    classes.push([Number(key.slice(cut + 1)), v])
   }
+  index = FeatureIndex.fromGroups(groups)
   featureIndexes.set(w.local, index)
   return index
 }

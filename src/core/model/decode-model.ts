@@ -2,6 +2,7 @@
 import { learnAlternations } from '../inflect/alternations.ts'
 import { CandidateFinder } from '../inflect/candidates.ts'
 import type { InflectionModel } from '../inflect/learn.ts'
+import type { Paradigm } from '../inflect/paradigm.ts'
 import { tiedClasses, twinMembers, twinParadigms } from '../inflect/twins.ts'
 import type { LexEntry } from '../lexicon/lexicon.ts'
 import { type Problem, ProblemError } from '../lexicon/problem.ts'
@@ -12,7 +13,7 @@ import { decodeCorpus } from './corpus-codec.ts'
 import { MODEL_FORMAT, MODEL_VERSION, type ModelJson } from './encode-model.ts'
 import type { KeptTable, Model } from './model.ts'
 import { decodeParadigm } from './paradigm-codec.ts'
-import { decodeTable } from './table-codec.ts'
+import { decodeTable, type TableJson } from './table-codec.ts'
 import { decodeWeights } from './weights-codec.ts'
 
 /**
@@ -50,12 +51,22 @@ export function decodeModel(text: string): Model {
 /** A model without its form index: what a sharded model's manifest carries besides its shard list. */
 export type ModelHead = Omit<Model, 'index'>
 
+/** How a head is read. */
+export interface HeadOptions {
+  /**
+   * Keep each attested table as its compact record and decode it whenever it is read (every record is still
+   * decoded and checked once while reading): a sharded model's head at the edge, where decoded tables
+   * would be most of an isolate's memory (about 190 MB for the whole German model) and few are ever read.
+   */
+  lazyTables?: boolean
+}
+
 /**
  * Check a parsed model file and rebuild everything but the form index (a sharded model reads its index
  * from shards); throws `ProblemError` (`bad-model`) like `decodeModel`.
  * @example decodeModelHead(JSON.parse(text)).inflection.book.paradigms.length // 31
  */
-export function decodeModelHead(json: ModelJson): ModelHead {
+export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelHead {
   checkHeader(json)
   checkModelJson(json as unknown as Record<string, unknown>)
   const cellsOf = (u: string) => json.cellKeys[u] ?? []
@@ -79,7 +90,7 @@ export function decodeModelHead(json: ModelJson): ModelHead {
       memberOf.push(-1)
       kept.push(t.kept)
     } else {
-      entries.push({ lemma, upos, inherent, cells: t.cells })
+      entries.push(opts.lazyTables ? lazyEntry(lemma, upos, inherent, table, paradigms, cellsOf(upos)) : { lemma, upos, inherent, cells: t.cells })
       memberOf.push(t.paradigm)
       kept.push(null)
     }
@@ -111,6 +122,23 @@ export function decodeModelHead(json: ModelJson): ModelHead {
   const head: ModelHead = { inflection, kept, options }
   if (json.corpus) head.corpusTokens = json.corpus.tokens
   return head
+}
+
+/** An attested entry whose `cells` are decoded from its table record on every read (an own, enumerable getter). */
+function lazyEntry(
+  lemma: string,
+  upos: string,
+  inherent: string,
+  table: TableJson,
+  paradigms: readonly Paradigm[],
+  cellKeys: readonly string[],
+): LexEntry {
+  const entry = { lemma, upos, inherent } as LexEntry
+  Object.defineProperty(entry, 'cells', {
+    enumerable: true,
+    get: () => (decodeTable(lemma, table, paradigms, cellKeys) as { cells: LexEntry['cells'] }).cells,
+  })
+  return entry
 }
 
 function checkHeader(json: ModelJson): void {

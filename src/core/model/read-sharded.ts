@@ -42,7 +42,7 @@ export function decodeShardedModel(
     throw bad('not JSON')
   }
   const refs = checkManifest(json)
-  const head = decodeModelHead(json.model)
+  const head = decodeModelHead(json.model, { lazyTables: true })
   const ctx: ShardContext = {
     entries: head.inflection.lexicon.entries,
     memberOf: head.inflection.book.memberOf,

@@ -2,6 +2,7 @@
 // Base64 VLQ is the integer encoding of Source Map Revision 3 (signed, 5 bits per character); `vlq` implements it.
 import { decode, encode } from 'vlq'
 import type { InflectionModel } from '../inflect/learn.ts'
+import { FeatureIndex } from '../inflect/feature-index.ts'
 import { provideFeatureIndex, type RankerWeights } from '../inflect/ranker.ts'
 import { LazyMap } from './lazy-map.ts'
 
@@ -132,8 +133,7 @@ export function encodeWeights(
 export function decodeWeights(json: WeightsJson, names?: readonly string[]): RankerWeights {
   // The local weights are most of a model file: they are decoded when the ranker first needs them.
   const local = new LazyMap<string, number>(function* () {
-    for (const [f, classes] of localByFeature(json, names))
-      for (const [c, w] of classes) yield [`${f}\u0000${c}`, w] as const
+    for (const [f, c, w] of localByFeature(json, names).entries()) yield [`${f}\u0000${c}`, w] as const
   })
   // Ranking reads weights feature by feature: that index is built straight from the file's layout.
   provideFeatureIndex(local, () => localByFeature(json, names))
@@ -142,22 +142,24 @@ export function decodeWeights(json: WeightsJson, names?: readonly string[]): Ran
   return { local, shared }
 }
 
-/** The local weights of a file as feature → class → weight, in the file's order (its layout, decoded). */
-function localByFeature(json: WeightsJson, names?: readonly string[]): Map<string, Map<number, number>> {
+/** The local weights of a file grouped by feature, in the file's order (its layout, decoded). */
+function localByFeature(json: WeightsJson, names?: readonly string[]): FeatureIndex {
   const ints = decode(json.local)
-  const index = new Map<string, Map<number, number>>()
   let at = 0
-  for (const f of namesOf(json, names)) {
-    const n = ints[at++]!
-    const classes = new Map<number, number>()
-    let c = 0
-    for (let k = 0; k < n; k++) {
-      c += ints[at++]!
-      classes.set(c, ints[at++]! / json.scale)
-    }
-    index.set(f, classes)
-  }
-  return index
+  return FeatureIndex.fromGroups(
+    (function* () {
+      for (const f of namesOf(json, names)) {
+        const n = ints[at++]!
+        const classes: [number, number][] = []
+        let c = 0
+        for (let k = 0; k < n; k++) {
+          c += ints[at++]!
+          classes.push([c, ints[at++]! / json.scale])
+        }
+        yield [f, classes] as const
+      }
+    })(),
+  )
 }
 
 function byCodeUnit(a: string, b: string): number {

@@ -1,0 +1,48 @@
+// A sharded model's head keeps attested tables as their compact records and decodes them when read
+// (German handbook tables from memory, see test/core/lookup/fixtures): the same tables, the same
+// predictions, and a damaged record still refused while reading.
+import { describe, expect, it } from 'vitest'
+import { expandLemma } from '../../../src/core/inflect/expand.ts'
+import { FeatureIndex } from '../../../src/core/inflect/feature-index.ts'
+import { decodeModelHead } from '../../../src/core/model/decode-model.ts'
+import { encodeModel } from '../../../src/core/model/encode-model.ts'
+import { germanModel } from '../lookup/fixtures/german.ts'
+
+describe('lazy tables in a model head', () => {
+  const text = encodeModel(germanModel())
+  const eager = decodeModelHead(JSON.parse(text))
+  const lazy = decodeModelHead(JSON.parse(text), { lazyTables: true })
+
+  it('reads every entry as the eager head does, spread or not', () => {
+    const a = eager.inflection.lexicon.entries
+    const b = lazy.inflection.lexicon.entries
+    expect(b.length).toBe(a.length)
+    expect(a.filter((e) => e.cells).length).toBeGreaterThan(5)
+    expect(b.map((e) => ({ ...e }))).toEqual(a.map((e) => ({ ...e })))
+    expect(JSON.stringify(b)).toBe(JSON.stringify(a))
+    for (const e of b.slice(0, 20))
+      expect(expandLemma(lazy.inflection, e.lemma, e.upos, e.inherent)).toEqual(
+        expandLemma(eager.inflection, e.lemma, e.upos, e.inherent),
+      )
+  })
+
+  it('still refuses a table record that does not fit its lemma', () => {
+    const json = JSON.parse(text)
+    const at = json.entries.findIndex((e: unknown[]) => typeof e[3] === 'number')
+    json.entries[at][3] = json.paradigms.length + 5 // a paradigm that does not exist
+    expect(() => decodeModelHead(json, { lazyTables: true })).toThrow(/model file/)
+  })
+})
+
+describe('FeatureIndex', () => {
+  it('gives each (feature, class) its weight, classes ascending, features in order', () => {
+    const index = FeatureIndex.fromGroups([
+      ['s1:e', [[7, 0.5], [2, -1], [40, 3]]],
+      ['p1:g', [[2, 0.25]]],
+    ])
+    const s = index.slot.get('s1:e')!
+    expect([2, 7, 40, 3].map((c) => index.weightOf(s, c))).toEqual([-1, 0.5, 3, undefined])
+    expect(index.weightOf(index.slot.get('p1:g')!, 2)).toBe(0.25)
+    expect([...index.entries()]).toEqual([['s1:e', 2, -1], ['s1:e', 7, 0.5], ['s1:e', 40, 3], ['p1:g', 2, 0.25]])
+  })
+})
