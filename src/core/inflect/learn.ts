@@ -108,7 +108,11 @@ export function learnFromLexicon(
 ): InflectionModel {
   const kind =
     options.stems === 'choose'
-      ? chooseStemKind(lexicon, (lex, k) => learnFromLexicon(lex, { ...options, stems: k }), options.stemSample ?? 400)
+      ? chooseStemKind(
+          lexicon,
+          (lex, k) => learnFromLexicon(lex, { ...options, stems: k }),
+          options.stemSample ?? 400,
+        )
       : (options.stems ?? 'lcs')
   const learned = extractParadigms(lexicon, kind)
   const alternations = learnAlternations(learned.paradigms, options.twins)

@@ -28,20 +28,27 @@ export function chooseStemKind(
   if (folds[1]!.length === 0) return STEM_KINDS[0]!
   let best = STEM_KINDS[0]!
   let bestRight = -1
+  let bestForms = -1
   for (const kind of STEM_KINDS) {
     let right = 0
+    let forms = 0
     for (const [k, fold] of folds.entries()) {
       const model = learn({ ...lexicon, entries: fold }, kind)
-      for (const e of folds[1 - k]!) if (tableRight(model, e)) right++
+      for (const e of folds[1 - k]!) {
+        const n = cellsRight(model, e)
+        forms += n
+        if (n === e.cells!.length) right++
+      }
     }
-    if (right > bestRight) [best, bestRight] = [kind, right]
+    if (right > bestRight || (right === bestRight && forms > bestForms))
+      [best, bestRight, bestForms] = [kind, right, forms]
   }
   return best
 }
 
-/** Whether a model's most probable form of every cell of a table is one of the table's forms. */
-function tableRight(model: InflectionModel, e: Lexicon['entries'][number]): boolean {
+/** How many cells of a table get one of the table's forms as the model's most probable form. */
+function cellsRight(model: InflectionModel, e: Lexicon['entries'][number]): number {
   const { cells } = predictLemma(model, e.lemma, e.upos, e.inherent, 1)
   const best = new Map(cells.map((c) => [c.key, c.forms[0]?.form]))
-  return e.cells!.every((c) => c.forms.includes(best.get(c.key) ?? '\u0000'))
+  return e.cells!.filter((c) => c.forms.includes(best.get(c.key) ?? '\u0000')).length
 }
