@@ -2,11 +2,14 @@
 // Pattern extraction follows Ahlberg, Forsberg & Hulden (2014), EACL (longest-common-subsequence paradigms).
 import type { LexEntry, Lexicon } from '../lexicon/lexicon.ts'
 import { matchStems, type Paradigm, type ParadigmCell, paradigmShapeKey, type StemShape } from './paradigm.ts'
-import { extractPattern, fillPattern, type Pattern } from './pattern.ts'
+import { extractPattern, fillPattern, type Pattern, prefixPattern } from './pattern.ts'
 
 /** A cell present in at least this share of a UPOS's tables belongs to its full inventory (common practice). */
 const FULL_CELL_SHARE = 0.5
 const SHAPE_SAMPLE = 24
+
+/** How a table's stem variables are found: LCS (Ahlberg et al. 2014) or one prefix stem (prefixPattern). */
+export type StemKind = 'lcs' | 'prefix'
 
 export interface ParadigmBook {
   paradigms: Paradigm[]
@@ -28,15 +31,16 @@ interface Group {
 /**
  * Learn the paradigm book of a lexicon. A table with gaps joins the largest full paradigm that reproduces
  * every cell it has (a missing cell is unknown, not different); only when none does is it a paradigm of its own.
+ * `stems: 'prefix'` takes each table's prefix-stem pattern where it has one (prefixPattern), else its LCS one.
  * @example extractParadigms(lexicon).paradigms[0].members // 412
  */
-export function extractParadigms(lex: Lexicon): ParadigmBook {
+export function extractParadigms(lex: Lexicon, stems: StemKind = 'lcs'): ParadigmBook {
   const full = fullInventories(lex)
   const groups = new Map<string, Group>()
   lex.entries.forEach((e, idx) => {
     if (!e.cells) return
     const flat = e.cells.flatMap((c) => c.forms)
-    const tp = extractPattern(e.lemma, flat)
+    const tp = (stems === 'prefix' ? prefixPattern(e.lemma, flat) : null) ?? extractPattern(e.lemma, flat)
     let k = 0
     const cells: ParadigmCell[] = e.cells.map((c) => ({ key: c.key, forms: c.forms.map(() => tp.forms[k++]!) }))
     const key = paradigmShapeKey(e.upos, tp.lemma, tp.openPrefix, cells)

@@ -12,7 +12,7 @@ import { CandidateFinder } from './candidates.ts'
 import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import type { CorpusEvidence } from './corpus-evidence.ts'
 import { sampleByClass } from './example-sample.ts'
-import { extractParadigms, type ParadigmBook, reproducesWith } from './extract.ts'
+import { extractParadigms, type ParadigmBook, reproducesWith, type StemKind } from './extract.ts'
 import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
 import { withPrior } from './prior.ts'
 import {
@@ -23,6 +23,7 @@ import {
 } from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
 import { trainCoded } from './ranker-train.ts'
+import { chooseStemKind } from './stem-choice.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
@@ -51,6 +52,12 @@ export interface LearnOptions {
    * per-example `ranker.l2` (prior.ts; absent in older files: plain `ranker.l2`).
    */
   prior?: number
+  /**
+   * How tables are cut into stems and endings (extract.ts): 'lcs', 'prefix', or 'choose' (stem-choice.ts:
+   * internal cross-validation on at most `stemSample` training tables). Absent: 'lcs'.
+   */
+  stems?: StemKind | 'choose'
+  stemSample?: number
 }
 
 export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
@@ -62,6 +69,8 @@ export const DEFAULT_LEARN_OPTIONS: LearnOptions = {
   combine: { cellWeight: 10, tableFloor: 0.001, cellFloor: 0.001, meanPower: 1, cellMix: 0.5 },
   twins: DEFAULT_TWIN_OPTIONS,
   prior: 10,
+  stems: 'choose',
+  stemSample: 400,
 }
 
 /** What learning produces: the lexicon, its paradigm book, and the weights that choose among paradigms. */
@@ -97,7 +106,15 @@ export function learnFromLexicon(
   lexicon: Lexicon,
   options: LearnOptions = DEFAULT_LEARN_OPTIONS,
 ): InflectionModel {
-  const learned = extractParadigms(lexicon)
+  const kind =
+    options.stems === 'choose'
+      ? chooseStemKind(
+          lexicon,
+          (lex, k) => learnFromLexicon(lex, { ...options, stems: k }),
+          options.stemSample ?? 400,
+        )
+      : (options.stems ?? 'lcs')
+  const learned = extractParadigms(lexicon, kind)
   const alternations = learnAlternations(learned.paradigms, options.twins)
   const own: string[][] = learned.paradigms.map(() => [])
   learned.memberOf.forEach((p, i) => {

@@ -59,6 +59,30 @@ export function extractPattern(lemma: string, forms: readonly string[]): TablePa
   return { lemma: lemmaPattern, forms: formPatterns, stems, openPrefix: false }
 }
 
+/**
+ * The prefix-stem pattern of a table: one variable, the longest prefix the lemma shares with every form,
+ * and each word's rest as a literal ending; null when some form shares no first letter with the lemma.
+ * Stem changes near the end (consonant gradation, lautata → lauttaa) then sit in the endings, where tables
+ * of one class get one pattern, instead of splitting the stem into variables around letters kept by chance.
+ * @example prefixPattern('lautata', ['lauttaa']).forms[0] // [0, 'taa']
+ */
+export function prefixPattern(lemma: string, forms: readonly string[]): TablePattern | null {
+  const letters = [...lemma]
+  let n = letters.length
+  for (const f of forms) {
+    const fl = [...f]
+    let k = 0
+    while (k < n && k < fl.length && fl[k] === letters[k]) k++
+    n = k
+  }
+  if (n < 1) return null
+  const pt = (w: string): Pattern => {
+    const rest = [...w].slice(n).join('')
+    return rest ? [0, rest] : [0]
+  }
+  return { lemma: pt(lemma), forms: forms.map(pt), stems: [letters.slice(0, n).join('')], openPrefix: false }
+}
+
 function render(letters: string[], varAt: (i: number) => number): Pattern {
   const out: Pattern = []
   let lit = ''
