@@ -3,6 +3,7 @@ import { createReadStream } from 'node:fs'
 import { mkdir, readdir, rm, writeFile } from 'node:fs/promises'
 import { fileURLToPath } from 'node:url'
 import { extractParadigms, type ParadigmBook } from '../src/core/inflect/extract.ts'
+import { stemKindOf } from '../src/core/inflect/learn.ts'
 import { applyParadigm, describeParadigm } from '../src/core/inflect/paradigm.ts'
 import type { Entry } from '../src/core/lexicon/entry.ts'
 import { buildLexicon, type Lexicon } from '../src/core/lexicon/lexicon.ts'
@@ -120,7 +121,7 @@ const STRING_LIST = /\[\n\s+"(?:[^"\\]|\\.)*"(?:,\n\s+"(?:[^"\\]|\\.)*")*\n\s+\]
  */
 export async function demoBookFiles(): Promise<BookFiles> {
   const lexicon = buildLexicon(await readDemoEntries())
-  return bookFiles(lexicon, extractParadigms(lexicon))
+  return bookFiles(lexicon, extractParadigms(lexicon, stemKindOf(lexicon)))
 }
 
 /**

@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url'
 import { beforeAll, describe, expect, it } from 'vitest'
 import { type BookFiles, bookFiles, readDemoEntries } from '../../scripts/build-paradigm-book.ts'
 import { extractParadigms } from '../../src/core/inflect/extract.ts'
+import { stemKindOf } from '../../src/core/inflect/learn.ts'
 import type { Entry } from '../../src/core/lexicon/entry.ts'
 import { buildLexicon } from '../../src/core/lexicon/lexicon.ts'
 
@@ -30,7 +31,7 @@ let committed: Map<string, string>
 beforeAll(async () => {
   entries = await readDemoEntries()
   const lexicon = buildLexicon(entries)
-  fresh = bookFiles(lexicon, extractParadigms(lexicon))
+  fresh = bookFiles(lexicon, extractParadigms(lexicon, stemKindOf(lexicon)))
   committed = new Map()
   for (const name of (await readdir(dir)).filter((f) => f.endsWith('.json')).sort()) {
     committed.set(name, await readFile(dir + name, 'utf8'))
@@ -110,7 +111,7 @@ describe('paradigms/', () => {
     ['ADJ', 'sūkka', 'Case=Nom|Degree=Sup|Number=Sing', 'pasūkka'],
   ])('gives %s %s its %s form %s through the rule of its paradigm', (upos, lemma, feats, form) => {
     const lexicon = buildLexicon(entries)
-    const extracted = extractParadigms(lexicon)
+    const extracted = extractParadigms(lexicon, stemKindOf(lexicon))
     const at = lexicon.entries.findIndex((e) => e.lemma === lemma && e.upos === upos)
     const id = extracted.paradigms[extracted.memberOf[at]!]!.id
     const shown = book(upos).find((p) => p.id === id)!

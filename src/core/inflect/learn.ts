@@ -101,20 +101,22 @@ export function learnInflection(
   return learnFromLexicon(lexicon, options)
 }
 
+/**
+ * How learning with `options` cuts this lexicon's tables into stems and endings (the choice of `stems`).
+ * @example extractParadigms(lexicon, stemKindOf(lexicon)) // the book learnFromLexicon starts from
+ */
+export function stemKindOf(lexicon: Lexicon, options: LearnOptions = DEFAULT_LEARN_OPTIONS): StemKind {
+  return options.stems === 'choose'
+    ? chooseStemKind(lexicon, (lex, k) => learnFromLexicon(lex, { ...options, stems: k }), options.stemSample ?? 400)
+    : (options.stems ?? 'lcs')
+}
+
 /** As learnInflection, from a lexicon already built. */
 export function learnFromLexicon(
   lexicon: Lexicon,
   options: LearnOptions = DEFAULT_LEARN_OPTIONS,
 ): InflectionModel {
-  const kind =
-    options.stems === 'choose'
-      ? chooseStemKind(
-          lexicon,
-          (lex, k) => learnFromLexicon(lex, { ...options, stems: k }),
-          options.stemSample ?? 400,
-        )
-      : (options.stems ?? 'lcs')
-  const learned = extractParadigms(lexicon, kind)
+  const learned = extractParadigms(lexicon, stemKindOf(lexicon, options))
   const alternations = learnAlternations(learned.paradigms, options.twins)
   const own: string[][] = learned.paradigms.map(() => [])
   learned.memberOf.forEach((p, i) => {
