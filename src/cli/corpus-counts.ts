@@ -1,6 +1,7 @@
 // Counting the forms of raw-text corpora (plain text or CoNLL-U), streamed, for `formfold learn --corpus`.
 import { createReadStream } from 'node:fs'
 import { openCorpus } from '../formats/index.ts'
+import { ownCopy } from '../core/lexicon/own-copy.ts'
 
 /** Form → count over all files (exact spellings; memory grows with the vocabulary, not the text). */
 export async function countCorpusForms(paths: string[], opts: { skipBad: boolean }): Promise<{ counts: Map<string, number>; tokens: number }> {
@@ -12,7 +13,9 @@ export async function countCorpusForms(paths: string[], opts: { skipBad: boolean
       skipBad: opts.skipBad,
     })
     for await (const t of corpus) {
-      counts.set(t.form, (counts.get(t.form) ?? 0) + 1)
+      const n = counts.get(t.form)
+      if (n === undefined) counts.set(ownCopy(t.form), 1)
+      else counts.set(t.form, n + 1)
       tokens++
     }
   }

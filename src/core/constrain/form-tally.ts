@@ -1,4 +1,5 @@
 // Corpus counts per form type (never per token), so a corpus of any length is counted in bounded memory.
+import { ownCopy } from '../lexicon/own-copy.ts'
 import { type ConstrainToken, goldKey } from './constrain-token.ts'
 
 /** What is kept about one form type. */
@@ -30,7 +31,7 @@ export class FormTally {
     let stats = this.#forms.get(token.form)
     if (!stats) {
       stats = { count: 0, initial: 0 }
-      this.#forms.set(token.form, stats)
+      this.#forms.set(ownCopy(token.form), stats)
     }
     stats.count++
     if (token.sentenceInitial) stats.initial++
