@@ -1,0 +1,56 @@
+// What a sharded model costs an isolate: heap of its head once decoded, then after answering indexed forms
+// (shards fetched) and unknown forms (the guesser's tables built), with the time each step took.
+// The model file comes from elsewhere, e.g. the whole German model of bench/scale-learn.ts --save FILE.
+// Run: node --expose-gc --max-old-space-size=16000 --import tsx bench/edge-memory.ts --model FILE [--budget BYTES]
+import { readFileSync } from 'node:fs'
+import { parseArgs } from 'node:util'
+import { gunzipSync } from 'node:zlib'
+import { decodeModel } from '../src/core/model/decode-model.ts'
+import { decodeShardedModel } from '../src/core/model/read-sharded.ts'
+import { shardModel } from '../src/core/model/shard-model.ts'
+import { analyzeJson } from '../src/http/lookup.ts'
+
+const { values } = parseArgs({
+  options: {
+    model: { type: 'string' },
+    budget: { type: 'string', default: '4000000' },
+    cache: { type: 'string', default: String(8 << 20) },
+    known: { type: 'string', default: 'Häuser,gingen' },
+    unknown: { type: 'string', default: 'Quaxelung,verschnorpelt' },
+  },
+})
+const gc = (globalThis as { gc?: () => void }).gc
+if (!values.model || !gc) {
+  process.stderr.write('usage: node --expose-gc --max-old-space-size=16000 --import tsx bench/edge-memory.ts --model FILE\n')
+  process.exit(2)
+}
+const heapMB = () => {
+  gc()
+  gc()
+  return process.memoryUsage().heapUsed / 1048576
+}
+let files: Awaited<ReturnType<typeof shardModel>> | undefined
+{
+  const bytes = readFileSync(values.model)
+  const text = (bytes[0] === 0x1f && bytes[1] === 0x8b ? gunzipSync(bytes) : bytes).toString('utf8')
+  files = await shardModel(decodeModel(text), Number(values.budget))
+}
+const shards = files.shards
+const base = heapMB()
+let t = performance.now()
+const model = decodeShardedModel(files.manifest, async (i) => new TextEncoder().encode(shards[i]), Number(values.cache))
+const result: Record<string, number> = {
+  shards: files.refs.length,
+  manifestBytes: new TextEncoder().encode(files.manifest).byteLength,
+  decodeSeconds: (performance.now() - t) / 1000,
+  headHeapMB: heapMB() - base,
+}
+for (const [name, list] of [['known', values.known!], ['unknown', values.unknown!]] as const) {
+  t = performance.now()
+  await analyzeJson(model, list.split(','), {})
+  result[`${name}Seconds`] = (performance.now() - t) / 1000
+  result[`after${name[0]!.toUpperCase()}${name.slice(1)}HeapMB`] = heapMB() - base
+}
+const rounded = Object.fromEntries(Object.entries(result).map(([k, v]) => [k, Math.round(v * 10) / 10]))
+process.stderr.write(`${JSON.stringify(rounded, null, 1)}\n`)
+process.stdout.write(`${JSON.stringify(rounded)}\n`)
