@@ -14,32 +14,55 @@ export interface FormStats {
 
 /**
  * Counts of every form type of a corpus. Memory grows with the number of distinct forms and of distinct
- * gold tags per form, not with the number of tokens.
+ * gold tags per form, not with the number of tokens: a type is a map entry, its form, and two counts in
+ * typed arrays (a million types of running text are a few tens of megabytes).
  * @example
  * const tally = new FormTally()
  * tally.add({ form: 'vessa', sentenceInitial: true })
  * tally.get('vessa') // { count: 1, initial: 1 }
  */
 export class FormTally {
-  readonly #forms = new Map<string, FormStats>()
+  /** Form → its type number (in order of first occurrence). */
+  readonly #ids = new Map<string, number>()
+  readonly #forms: string[] = []
+  #count = new Int32Array(1024)
+  #initial = new Int32Array(1024)
+  /** Type number → gold key → tokens, for the types some token of which had gold tags. */
+  readonly #gold = new Map<number, Map<string, number>>()
   #tokens = 0
   #goldTokens = 0
 
   /** Count one token. */
   add(token: ConstrainToken): void {
     this.#tokens++
-    let stats = this.#forms.get(token.form)
-    if (!stats) {
-      stats = { count: 0, initial: 0 }
-      this.#forms.set(ownCopy(token.form), stats)
+    let id = this.#ids.get(token.form)
+    if (id === undefined) {
+      id = this.#forms.length
+      const form = ownCopy(token.form)
+      this.#ids.set(form, id)
+      this.#forms.push(form)
+      if (id === this.#count.length) this.#grow()
     }
-    stats.count++
-    if (token.sentenceInitial) stats.initial++
+    this.#count[id]!++
+    if (token.sentenceInitial) this.#initial[id]!++
     const key = goldKey(token.gold)
     if (key === '') return
     this.#goldTokens++
-    stats.gold ??= new Map()
-    stats.gold.set(key, (stats.gold.get(key) ?? 0) + 1)
+    let gold = this.#gold.get(id)
+    if (!gold) {
+      gold = new Map()
+      this.#gold.set(id, gold)
+    }
+    gold.set(key, (gold.get(key) ?? 0) + 1)
+  }
+
+  #grow(): void {
+    const count = new Int32Array(this.#count.length * 2)
+    count.set(this.#count)
+    this.#count = count
+    const initial = new Int32Array(this.#initial.length * 2)
+    initial.set(this.#initial)
+    this.#initial = initial
   }
 
   /** Tokens counted. */
@@ -54,20 +77,32 @@ export class FormTally {
 
   /** Distinct forms counted. */
   get types(): number {
-    return this.#forms.size
+    return this.#forms.length
   }
 
   get(form: string): FormStats | undefined {
-    return this.#forms.get(form)
+    const id = this.#ids.get(form)
+    return id === undefined ? undefined : this.#stats(id)
+  }
+
+  #stats(id: number): FormStats {
+    const stats: FormStats = { count: this.#count[id]!, initial: this.#initial[id]! }
+    const gold = this.#gold.get(id)
+    if (gold) stats.gold = gold
+    return stats
   }
 
   /**
-   * Forms with their counts, most frequent first (ties by code point order, so output is reproducible).
-   * @example tally.byFrequency()[0] // ['the', { count: 69971, initial: 0 }]
+   * Forms with their counts, most frequent first (ties by code point order, so output is reproducible);
+   * only the order is held while iterating (four bytes a type), each pair is made as it is reached.
+   * @example [...tally.byFrequency()][0] // ['the', { count: 69971, initial: 0 }]
    */
-  byFrequency(): [string, FormStats][] {
-    return [...this.#forms].sort(
-      (a, b) => b[1].count - a[1].count || (a[0] < b[0] ? -1 : a[0] > b[0] ? 1 : 0),
-    )
+  *byFrequency(): Generator<[string, FormStats]> {
+    const forms = this.#forms
+    const count = this.#count
+    const order = new Int32Array(forms.length)
+    for (let i = 0; i < order.length; i++) order[i] = i
+    order.sort((a, b) => count[b]! - count[a]! || (forms[a]! < forms[b]! ? -1 : forms[a]! > forms[b]! ? 1 : 0))
+    for (const id of order) yield [forms[id]!, this.#stats(id)]
   }
 }
