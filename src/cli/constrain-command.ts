@@ -4,6 +4,7 @@ import { type CandidateSource, parseTokenTagSource, SOURCE_ORDER } from '../core
 import { UPOS_TAGS } from '../core/lexicon/ud.ts'
 import { type ConstrainRun, runConstrain } from './constrain-run.ts'
 import { EXIT, runCommand } from './io.ts'
+import { preferSmallHeap } from './streaming-heap.ts'
 
 interface RawOptions {
   model: string
@@ -87,7 +88,10 @@ export function registerConstrain(program: Command): void {
     .option('--allowed-key <name>', 'MISC attribute for the allowed tags', 'Allowed')
     .option('--skip-bad', 'count bad corpus lines instead of stopping at the first')
     .action((corpus: string | undefined, opts: RawOptions) =>
-      runCommand(() => runConstrain(checked(corpus, opts))),
+      runCommand(() => {
+        preferSmallHeap()
+        return runConstrain(checked(corpus, opts))
+      }),
     )
 }
 

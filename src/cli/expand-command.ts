@@ -7,6 +7,7 @@ import { formatJsonLine, formatTableRow, parseLemmaLine, streamRecords } from '.
 import { reportSkipped, runCommand } from './io.ts'
 import { loadModelFile } from './model-file.ts'
 import { spoolStdin } from './spool-stdin.ts'
+import { preferSmallHeap } from './streaming-heap.ts'
 
 export function registerExpand(program: Command): void {
   program
@@ -20,6 +21,7 @@ export function registerExpand(program: Command): void {
     .option('--skip-bad', 'count bad lines instead of stopping at the first')
     .action((lemmas: string | undefined, opts: { model: string; scores?: boolean; format: string; alternatives: string; skipBad?: boolean }) =>
       runCommand(async () => {
+        preferSmallHeap()
         if (opts.format !== 'tsv' && opts.format !== 'jsonl') {
           throw new ProblemError({ code: 'bad-entry', message: `--format must be tsv or jsonl, not "${opts.format}"` })
         }
