@@ -32,8 +32,8 @@ export interface LookupContext {
   reverse: ReverseRules
   /** (lemma, upos) of each bare lemma the dictionary lists → its inherent features. */
   listed: Map<string, string>
-  /** (lemma, upos) of each entry with a table → the cells it has. */
-  attested: Map<string, Set<string>>
+  /** (lemma, upos) of each entry with a table → the cells it has (entries alike share one set: read only). */
+  attested: Map<string, ReadonlySet<string>>
   /** Per UPOS: the share of its lemmas that start with a capital (smoothed). */
   capitalShare: Map<string, number>
   tables: BoundedCache<PredictedTable[]>
@@ -52,10 +52,21 @@ export function lookupContext(model: LookupModel): LookupContext {
   const listed = new Map<string, string>()
   const attested = new Map<string, Set<string>>()
   const caps = new Map<string, [number, number]>()
+  // Tables of one UPOS mostly have the same cells: entries with the same cells share one (never changed) set.
+  const cellSets = new Map<string, Set<string>>()
   for (const e of model.inflection.lexicon.entries) {
     const key = entryKey(e.lemma, e.upos)
-    if (e.cells) attested.set(key, new Set(e.cells.map((c) => c.key)))
-    else listed.set(key, e.inherent)
+    const cells = e.cells
+    if (cells) {
+      const keys = cells.map((c) => c.key)
+      const id = keys.join('\u0001')
+      let set = cellSets.get(id)
+      if (!set) {
+        set = new Set(keys)
+        cellSets.set(id, set)
+      }
+      attested.set(key, set)
+    } else listed.set(key, e.inherent)
     const c = caps.get(e.upos) ?? [0, 0]
     if (isCapitalized(e.lemma)) c[0]++
     c[1]++
