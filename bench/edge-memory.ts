@@ -36,6 +36,7 @@ let files: Awaited<ReturnType<typeof shardModel>> | undefined
   files = await shardModel(decodeModel(text), Number(values.budget))
 }
 const shards = files.shards
+await new Promise((done) => setTimeout(done, 10)) // weak references from sharding are cleared between jobs
 const base = heapMB()
 let t = performance.now()
 const model = decodeShardedModel(files.manifest, async (i) => new TextEncoder().encode(shards[i]), Number(values.cache))

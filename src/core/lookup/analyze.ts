@@ -42,18 +42,19 @@ const EXACT: readonly string[] = Object.freeze(['exact'])
 /** An indexed token's default-bounded answer. */
 type Answer = { how: readonly string[]; candidates: readonly Candidate[] }
 const answered = new WeakMap<FormIndex, Map<string, Answer>>()
-let lastIndex: FormIndex | undefined
+// The last index asked for, held weakly: a model dropped by its owner must not stay alive through this.
+let lastIndex: WeakRef<FormIndex> | undefined
 let lastAnswers: Map<string, Answer> | undefined
 
 /** The answers kept for an index (the last one asked for is remembered, so one model costs no lookup). */
 function answersOf(index: FormIndex): Map<string, Answer> {
-  if (index === lastIndex) return lastAnswers!
+  if (lastIndex?.deref() === index) return lastAnswers!
   let answers = answered.get(index)
   if (!answers) {
     answers = new Map()
     answered.set(index, answers)
   }
-  lastIndex = index
+  lastIndex = new WeakRef(index)
   lastAnswers = answers
   return answers
 }

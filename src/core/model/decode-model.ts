@@ -4,7 +4,7 @@ import { CandidateFinder } from '../inflect/candidates.ts'
 import type { InflectionModel } from '../inflect/learn.ts'
 import type { Paradigm } from '../inflect/paradigm.ts'
 import { tiedClasses, twinMembers, twinParadigms } from '../inflect/twins.ts'
-import type { LexEntry } from '../lexicon/lexicon.ts'
+import type { Cell, LexEntry } from '../lexicon/lexicon.ts'
 import { type Problem, ProblemError } from '../lexicon/problem.ts'
 import { assembleModel } from './build-model.ts'
 import { decodeAllCellRules } from './cell-rules-codec.ts'
@@ -79,6 +79,12 @@ export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelH
   const entries: LexEntry[] = []
   const memberOf: number[] = []
   const kept: (KeptTable[] | null)[] = []
+  const books = new Map<string, { paradigms: readonly Paradigm[]; cellKeys: readonly string[] }>()
+  const bookOf = (upos: string) => {
+    let b = books.get(upos)
+    if (!b) books.set(upos, (b = { paradigms, cellKeys: cellsOf(upos) }))
+    return b
+  }
   for (const [lemma, u, f, table] of json.entries) {
     const upos = json.upos[u]
     const inherent = json.feats[f]
@@ -90,7 +96,7 @@ export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelH
       memberOf.push(-1)
       kept.push(t.kept)
     } else {
-      entries.push(opts.lazyTables ? lazyEntry(lemma, upos, inherent, table, paradigms, cellsOf(upos)) : { lemma, upos, inherent, cells: t.cells })
+      entries.push(opts.lazyTables ? new LazyTableEntry(lemma, upos, inherent, table, bookOf(upos)) : { lemma, upos, inherent, cells: t.cells })
       memberOf.push(t.paradigm)
       kept.push(null)
     }
@@ -124,21 +130,27 @@ export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelH
   return head
 }
 
-/** An attested entry whose `cells` are decoded from its table record on every read (an own, enumerable getter). */
-function lazyEntry(
-  lemma: string,
-  upos: string,
-  inherent: string,
-  table: TableJson,
-  paradigms: readonly Paradigm[],
-  cellKeys: readonly string[],
-): LexEntry {
-  const entry = { lemma, upos, inherent } as LexEntry
-  Object.defineProperty(entry, 'cells', {
-    enumerable: true,
-    get: () => (decodeTable(lemma, table, paradigms, cellKeys) as { cells: LexEntry['cells'] }).cells,
-  })
-  return entry
+/**
+ * An attested entry whose `cells` are decoded from its table record on every read: five fields and a getter
+ * its class shares (a getter per entry would give every entry a closure and a hidden class of its own).
+ * Written out (`JSON.stringify`) it is the plain entry.
+ */
+class LazyTableEntry implements LexEntry {
+  constructor(
+    readonly lemma: string,
+    readonly upos: string,
+    readonly inherent: string,
+    private readonly table: TableJson,
+    private readonly book: { paradigms: readonly Paradigm[]; cellKeys: readonly string[] },
+  ) {}
+
+  get cells(): Cell[] {
+    return (decodeTable(this.lemma, this.table, this.book.paradigms, this.book.cellKeys) as { cells: Cell[] }).cells
+  }
+
+  toJSON(): LexEntry {
+    return { lemma: this.lemma, upos: this.upos, inherent: this.inherent, cells: this.cells }
+  }
 }
 
 function checkHeader(json: ModelJson): void {

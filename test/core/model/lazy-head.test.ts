@@ -13,12 +13,13 @@ describe('lazy tables in a model head', () => {
   const eager = decodeModelHead(JSON.parse(text))
   const lazy = decodeModelHead(JSON.parse(text), { lazyTables: true })
 
-  it('reads every entry as the eager head does, spread or not', () => {
+  it('reads every entry as the eager head does, field by field and written out', () => {
     const a = eager.inflection.lexicon.entries
     const b = lazy.inflection.lexicon.entries
     expect(b.length).toBe(a.length)
     expect(a.filter((e) => e.cells).length).toBeGreaterThan(5)
-    expect(b.map((e) => ({ ...e }))).toEqual(a.map((e) => ({ ...e })))
+    const plain = (e: (typeof a)[number]) => ({ lemma: e.lemma, upos: e.upos, inherent: e.inherent, cells: e.cells })
+    expect(b.map(plain)).toEqual(a.map(plain))
     expect(JSON.stringify(b)).toBe(JSON.stringify(a))
     for (const e of b.slice(0, 20))
       expect(expandLemma(lazy.inflection, e.lemma, e.upos, e.inherent)).toEqual(
