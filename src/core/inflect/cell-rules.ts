@@ -4,6 +4,7 @@
 import type { Lexicon } from '../lexicon/lexicon.ts'
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
+import { type EditFactor, reweigh, ruleLeadP } from './edit-factor.ts'
 import { sampleByClass } from './example-sample.ts'
 import { stemShapes } from './extract.ts'
 import { type FeatureOptions, lemmaFeatures } from './features.ts'
@@ -180,13 +181,17 @@ function relabel(m: CellRuleModel, key: string): CellRuleModel {
   return { upos: m.upos, key, rules, weights, finder: m.finder }
 }
 
-/** The probability of each form of one cell for a lemma, best first (`local`: the lemma's features, when made already). */
+/**
+ * The probability of each form of one cell for a lemma, best first (`local`: the lemma's features, when made
+ * already; `edit`: the edit factor's distribution for the lemma, and its weight, see edit-factor.ts).
+ */
 export function cellFormDistribution(
   m: CellRuleModel,
   lemma: string,
   inherent: string,
   features: FeatureOptions,
   local: string[] = lemmaFeatures(lemma, inherent, features),
+  edit?: { factor: EditFactor; dist: readonly number[]; weight: number },
 ): Map<string, number> {
   const found = m.finder.find(lemma, m.upos)
   const dist = new Map<string, number>()
@@ -197,6 +202,10 @@ export function cellFormDistribution(
     found.map((c) => c.paradigm),
     found.map((c) => c.shared),
   )
+  if (edit) {
+    const lead = found.map((c) => ruleLeadP(edit.factor, edit.dist, m.rules[c.paradigm]!))
+    reweigh(probs, lead, edit.weight)
+  }
   found.forEach((c, i) => {
     const form = fillPattern(m.rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems)
     if (form) dist.set(form, (dist.get(form) ?? 0) + probs[i]!)

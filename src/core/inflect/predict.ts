@@ -1,6 +1,7 @@
 // Prediction: the ranked candidate tables of a lemma, and its expanded table with a score per cell.
 import { cellFormDistribution } from './cell-rules.ts'
 import { rerankByCorpus } from './corpus-evidence.ts'
+import { editDistribution, reweigh } from './edit-factor.ts'
 import { lemmaFeatures } from './features.ts'
 import type { InflectionModel } from './learn.ts'
 import { fillPattern } from './pattern.ts'
@@ -41,6 +42,11 @@ function rankTables(
     found.map((c) => c.paradigm),
     found.map((c) => c.shared),
   )
+  const factor = model.edits?.byUpos.get(upos)
+  if (factor) {
+    const d = editDistribution(factor, lemma)
+    reweigh(probs, found.map((c) => d[model.edits!.classOf[c.paradigm]!]!), model.options.edits?.weight ?? 1)
+  }
   const tables = new Map<string, { table: PredictedTable; best: number }>()
   found.forEach((c, i) => {
     const p = model.book.paradigms[c.paradigm]!
@@ -132,12 +138,15 @@ function cellDistributions(model: InflectionModel, lemma: string, upos: string, 
   const dists = new Map<string, Map<string, number>>()
   if (model.options.combine.cellWeight <= 0 && model.options.combine.cellMix <= 0) return dists
   const local = lemmaFeatures(lemma, inherent, model.options.features)
+  const factor = model.edits?.byUpos.get(upos)
+  const weight = model.options.edits?.weight ?? 1
+  const edit = factor && { factor, dist: editDistribution(factor, lemma), weight }
   // Syncretic cells learned as one share their finder (see cell-rules.ts): one distribution serves them all.
   const byFinder = new Map<object, Map<string, number>>()
   for (const m of model.cells) {
     if (m.upos !== upos) continue
     const known = byFinder.get(m.finder)
-    const d = known ? new Map(known) : cellFormDistribution(m, lemma, inherent, model.options.features, local)
+    const d = known ? new Map(known) : cellFormDistribution(m, lemma, inherent, model.options.features, local, edit)
     if (!known) byFinder.set(m.finder, d)
     if (d.size > 0) dists.set(m.key, d)
   }
