@@ -1,6 +1,5 @@
 // The word-initial edit factor: participle ge- from the lemma's start and end, and its product with rankers.
 import { describe, expect, it } from 'vitest'
-import type { Entry } from '../../../src/core/lexicon/entry.ts'
 import {
   cellLeadProbability,
   editDistribution,
@@ -10,6 +9,10 @@ import {
 } from '../../../src/core/inflect/edit-factor.ts'
 import { learnInflection } from '../../../src/core/inflect/learn.ts'
 import { predictLemma } from '../../../src/core/inflect/predict.ts'
+import type { Entry } from '../../../src/core/lexicon/entry.ts'
+import { modelFromInflection } from '../../../src/core/model/build-model.ts'
+import { decodeModel } from '../../../src/core/model/decode-model.ts'
+import { encodeModel } from '../../../src/core/model/encode-model.ts'
 
 const PART = 'Tense=Past|VerbForm=Part'
 const INF = 'VerbForm=Inf'
@@ -40,7 +43,13 @@ const entries = [
 describe('edit factor', () => {
   it('sees the first and last letters only', () => {
     expect(editFeatures('belegen')).toEqual(
-      ['b', 'p1:b', 'p2:be', 'p3:bel', 'p4:bele', 'p5:beleg'].concat(['s1:n', 's2:en', 's3:gen', 's4:egen', 's5:legen']),
+      ['b', 'p1:b', 'p2:be', 'p3:bel', 'p4:bele', 'p5:beleg'].concat([
+        's1:n',
+        's2:en',
+        's3:gen',
+        's4:egen',
+        's5:legen',
+      ]),
     )
   })
 
@@ -52,9 +61,20 @@ describe('edit factor', () => {
     expect(noGe('verlangen')).toBeGreaterThan(0.5)
     expect(noGe('markieren')).toBeGreaterThan(0.5)
     expect(noGe('lehren')).toBeLessThan(0.5)
-    const best = (lemma: string) => predictLemma(model, lemma, 'VERB').cells.find((c) => c.key === PART)!.forms[0]!.form
+    const best = (lemma: string) =>
+      predictLemma(model, lemma, 'VERB').cells.find((c) => c.key === PART)!.forms[0]!.form
     expect(best('belegen')).toBe('belegt')
     expect(best('lehren')).toBe('gelehrt')
+  })
+
+  it('is learned again, the same, when a model file is read', () => {
+    const learned = learnInflection(entries)
+    const read = decodeModel(encodeModel(modelFromInflection(learned))).inflection
+    const a = learned.edits!.byUpos.get('VERB')!
+    const b = read.edits!.byUpos.get('VERB')!
+    expect([...b.weights.local]).toEqual([...a.weights.local])
+    expect(read.edits!.classOf).toEqual(learned.edits!.classOf)
+    expect(editDistribution(b, 'bereden')).toEqual(editDistribution(a, 'bereden'))
   })
 
   it('is absent when the paradigms do not differ in their initial edits', () => {
