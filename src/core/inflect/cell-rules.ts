@@ -4,6 +4,7 @@
 import type { Lexicon } from '../lexicon/lexicon.ts'
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
+import type { ModifierFilter } from './compound-prefix.ts'
 import { type EditFactor, reweigh, ruleLeadP } from './edit-factor.ts'
 import { sampleByClass } from './example-sample.ts'
 import { stemShapes } from './extract.ts'
@@ -38,6 +39,7 @@ export function learnCellRules(
   alternations: Alternations = {},
   twinOptions?: TwinOptions,
   prior?: number,
+  modifiers?: ModifierFilter,
 ): CellRuleModel[] {
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
@@ -131,7 +133,9 @@ export function learnCellRules(
       }
       for (const i of picked) {
         const it = items[i]!
-        localOf[it.t] ??= lemmaFeatures(it.lemma, it.inherent, features)
+        localOf[it.t] ??= modifiers
+          ? modifiers.apply(it.lemma, upos, lemmaFeatures(it.lemma, it.inherent, features))
+          : lemmaFeatures(it.lemma, it.inherent, features)
         coder.add(example(it, own[i]!, localOf[it.t]!))
       }
       const swap = alternations[upos]

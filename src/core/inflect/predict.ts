@@ -2,6 +2,7 @@
 import { cellFormDistribution } from './cell-rules.ts'
 import { rerankByCorpus } from './corpus-evidence.ts'
 import { editDistribution, reweigh } from './edit-factor.ts'
+import { modifierFilterOf } from './compound-prefix.ts'
 import { lemmaFeatures } from './features.ts'
 import type { InflectionModel } from './learn.ts'
 import { fillPattern } from './pattern.ts'
@@ -38,7 +39,7 @@ function rankTables(
   if (found.length === 0) return { tables: [], dists: new Map() }
   const probs = scoreCandidates(
     model.weights,
-    lemmaFeatures(lemma, inherent, model.options.features),
+    localFeatures(model, lemma, upos, inherent),
     found.map((c) => c.paradigm),
     found.map((c) => c.shared),
   )
@@ -134,10 +135,20 @@ function corpusWeighted(
   return new Map(forms.map((f, i) => [f, scores[i]!]))
 }
 
+/**
+ * A lemma's shape features as the rankers were trained on them (a compound's without its prefixes).
+ * @example localFeatures(model, 'Gitarrenbauer', 'NOUN', '_').some((f) => f.startsWith('p1:')) // false when Bauer is known
+ */
+export function localFeatures(model: InflectionModel, lemma: string, upos: string, inherent: string): string[] {
+  const f = lemmaFeatures(lemma, inherent, model.options.features)
+  const c = model.options.compounds
+  return c ? modifierFilterOf(model.lexicon.entries, c.minHead).apply(lemma, upos, f) : f
+}
+
 function cellDistributions(model: InflectionModel, lemma: string, upos: string, inherent: string): Map<string, Map<string, number>> {
   const dists = new Map<string, Map<string, number>>()
   if (model.options.combine.cellWeight <= 0 && model.options.combine.cellMix <= 0) return dists
-  const local = lemmaFeatures(lemma, inherent, model.options.features)
+  const local = localFeatures(model, lemma, upos, inherent)
   const factor = model.edits?.byUpos.get(upos)
   const weight = model.options.edits?.weight ?? 1
   const edit = factor && { factor, dist: editDistribution(factor, lemma), weight }
