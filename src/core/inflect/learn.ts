@@ -59,8 +59,9 @@ export interface LearnOptions {
    */
   edits?: { weight: number }
   /**
-   * A lemma ending in a known lemma of at least `minHead` letters has no prefix features (compound-prefix.ts;
-   * absent: off). Measured on DDN13 (dev): German nouns 0.780 → 0.795 table, verbs 0.9728 → 0.9754 form.
+   * In the cell rankers, a lemma ending in a known lemma of at least `minHead` letters has no prefix
+   * features (compound-prefix.ts; absent: off). Measured on DDN13 (dev): German nouns 0.780 → 0.795 table,
+   * verbs 0.9728 → 0.9754 form. In the table ranker too it raised the English Brown-sample ambiguity.
    */
   compounds?: { minHead: number }
 }
@@ -140,9 +141,7 @@ export function learnFromLexicon(
       if (c.paradigm === own || reproducesWith(book.paradigms[c.paradigm]!, e, c.stems)) gold.push(k)
     })
     return {
-      local: modifiers
-        ? modifiers.apply(e.lemma, e.upos, lemmaFeatures(e.lemma, e.inherent, options.features))
-        : lemmaFeatures(e.lemma, e.inherent, options.features),
+      local: lemmaFeatures(e.lemma, e.inherent, options.features),
       candidates: found.map((c) => classOf?.[c.paradigm] ?? c.paradigm),
       shared: found.map((c) => c.shared),
       gold,

@@ -39,7 +39,7 @@ function rankTables(
   if (found.length === 0) return { tables: [], dists: new Map() }
   const probs = scoreCandidates(
     model.weights,
-    localFeatures(model, lemma, upos, inherent),
+    lemmaFeatures(lemma, inherent, model.options.features),
     found.map((c) => c.paradigm),
     found.map((c) => c.shared),
   )
@@ -136,7 +136,7 @@ function corpusWeighted(
 }
 
 /**
- * A lemma's shape features as the rankers were trained on them (a compound's without its prefixes).
+ * A lemma's shape features as the cell rankers were trained on them (a compound's without its prefixes).
  * @example localFeatures(model, 'Gitarrenbauer', 'NOUN', '_').some((f) => f.startsWith('p1:')) // false when Bauer is known
  */
 export function localFeatures(model: InflectionModel, lemma: string, upos: string, inherent: string): string[] {

@@ -2,8 +2,9 @@
 // A form's candidate lemmas come from reversed rewrites, weighed by how often each rewrite made forms with
 // this ending; each is then inflected forward by the ranker: P(lemma | form) ∝ P(rewrite | ending) ·
 // P(form ∈ table(lemma))^forward · the dictionary's preferences (listed lemmas, capitalization per UPOS).
+import { lemmaFeatures } from '../inflect/features.ts'
 import { fillPattern } from '../inflect/pattern.ts'
-import { localFeatures, type PredictedTable, predictTables } from '../inflect/predict.ts'
+import { type PredictedTable, predictTables } from '../inflect/predict.ts'
 import { scoreCandidates } from '../inflect/ranker.ts'
 import { entryKey } from '../lexicon/entry.ts'
 import { mergeFeats } from '../lexicon/feats.ts'
@@ -219,7 +220,7 @@ function quickFit(
       ? []
       : scoreCandidates(
           inf.weights,
-          localFeatures(inf, lemma, upos, inherent),
+          lemmaFeatures(lemma, inherent, inf.options.features),
           found.map((c) => c.paradigm),
           found.map((c) => c.shared),
         )
