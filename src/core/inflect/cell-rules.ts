@@ -4,6 +4,8 @@
 import type { Lexicon } from '../lexicon/lexicon.ts'
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
+import type { ModifierFilter } from './compound-prefix.ts'
+import { type EditFactor, reweigh, ruleLeadP } from './edit-factor.ts'
 import { sampleByClass } from './example-sample.ts'
 import { stemShapes } from './extract.ts'
 import { type FeatureOptions, lemmaFeatures } from './features.ts'
@@ -37,6 +39,7 @@ export function learnCellRules(
   alternations: Alternations = {},
   twinOptions?: TwinOptions,
   prior?: number,
+  modifiers?: ModifierFilter,
 ): CellRuleModel[] {
   const out: CellRuleModel[] = []
   for (const [upos, keys] of Object.entries(lex.cellKeys)) {
@@ -130,7 +133,9 @@ export function learnCellRules(
       }
       for (const i of picked) {
         const it = items[i]!
-        localOf[it.t] ??= lemmaFeatures(it.lemma, it.inherent, features)
+        localOf[it.t] ??= modifiers
+          ? modifiers.apply(it.lemma, upos, lemmaFeatures(it.lemma, it.inherent, features))
+          : lemmaFeatures(it.lemma, it.inherent, features)
         coder.add(example(it, own[i]!, localOf[it.t]!))
       }
       const swap = alternations[upos]
@@ -180,13 +185,17 @@ function relabel(m: CellRuleModel, key: string): CellRuleModel {
   return { upos: m.upos, key, rules, weights, finder: m.finder }
 }
 
-/** The probability of each form of one cell for a lemma, best first (`local`: the lemma's features, when made already). */
+/**
+ * The probability of each form of one cell for a lemma, best first (`local`: the lemma's features, when made
+ * already; `edit`: the edit factor's distribution for the lemma, and its weight, see edit-factor.ts).
+ */
 export function cellFormDistribution(
   m: CellRuleModel,
   lemma: string,
   inherent: string,
   features: FeatureOptions,
   local: string[] = lemmaFeatures(lemma, inherent, features),
+  edit?: { factor: EditFactor; dist: readonly number[]; weight: number },
 ): Map<string, number> {
   const found = m.finder.find(lemma, m.upos)
   const dist = new Map<string, number>()
@@ -197,6 +206,10 @@ export function cellFormDistribution(
     found.map((c) => c.paradigm),
     found.map((c) => c.shared),
   )
+  if (edit) {
+    const lead = found.map((c) => ruleLeadP(edit.factor, edit.dist, m.rules[c.paradigm]!))
+    reweigh(probs, lead, edit.weight)
+  }
   found.forEach((c, i) => {
     const form = fillPattern(m.rules[c.paradigm]!.cells[0]!.forms[0]!, c.stems)
     if (form) dist.set(form, (dist.get(form) ?? 0) + probs[i]!)

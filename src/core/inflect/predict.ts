@@ -1,6 +1,8 @@
 // Prediction: the ranked candidate tables of a lemma, and its expanded table with a score per cell.
 import { cellFormDistribution } from './cell-rules.ts'
 import { rerankByCorpus } from './corpus-evidence.ts'
+import { editDistribution, reweigh } from './edit-factor.ts'
+import { modifierFilterOf } from './compound-prefix.ts'
 import { lemmaFeatures } from './features.ts'
 import type { InflectionModel } from './learn.ts'
 import { fillPattern } from './pattern.ts'
@@ -41,6 +43,11 @@ function rankTables(
     found.map((c) => c.paradigm),
     found.map((c) => c.shared),
   )
+  const factor = model.edits?.byUpos.get(upos)
+  if (factor) {
+    const d = editDistribution(factor, lemma)
+    reweigh(probs, found.map((c) => d[model.edits!.classOf[c.paradigm]!]!), model.options.edits?.weight ?? 1)
+  }
   const tables = new Map<string, { table: PredictedTable; best: number }>()
   found.forEach((c, i) => {
     const p = model.book.paradigms[c.paradigm]!
@@ -128,16 +135,29 @@ function corpusWeighted(
   return new Map(forms.map((f, i) => [f, scores[i]!]))
 }
 
+/**
+ * A lemma's shape features as the cell rankers were trained on them (a compound's without its prefixes).
+ * @example localFeatures(model, 'Gitarrenbauer', 'NOUN', '_').some((f) => f.startsWith('p1:')) // false when Bauer is known
+ */
+export function localFeatures(model: InflectionModel, lemma: string, upos: string, inherent: string): string[] {
+  const f = lemmaFeatures(lemma, inherent, model.options.features)
+  const c = model.options.compounds
+  return c ? modifierFilterOf(model.lexicon.entries, c.minHead).apply(lemma, upos, f) : f
+}
+
 function cellDistributions(model: InflectionModel, lemma: string, upos: string, inherent: string): Map<string, Map<string, number>> {
   const dists = new Map<string, Map<string, number>>()
   if (model.options.combine.cellWeight <= 0 && model.options.combine.cellMix <= 0) return dists
-  const local = lemmaFeatures(lemma, inherent, model.options.features)
+  const local = localFeatures(model, lemma, upos, inherent)
+  const factor = model.edits?.byUpos.get(upos)
+  const weight = model.options.edits?.weight ?? 1
+  const edit = factor && { factor, dist: editDistribution(factor, lemma), weight }
   // Syncretic cells learned as one share their finder (see cell-rules.ts): one distribution serves them all.
   const byFinder = new Map<object, Map<string, number>>()
   for (const m of model.cells) {
     if (m.upos !== upos) continue
     const known = byFinder.get(m.finder)
-    const d = known ? new Map(known) : cellFormDistribution(m, lemma, inherent, model.options.features, local)
+    const d = known ? new Map(known) : cellFormDistribution(m, lemma, inherent, model.options.features, local, edit)
     if (!known) byFinder.set(m.finder, d)
     if (d.size > 0) dists.set(m.key, d)
   }

@@ -1,5 +1,6 @@
 // Reading a model file: check format and version, rebuild the inflection model and the form index.
 import { learnAlternations } from '../inflect/alternations.ts'
+import { learnEditFactors } from '../inflect/edit-factor.ts'
 import { CandidateFinder } from '../inflect/candidates.ts'
 import type { InflectionModel } from '../inflect/learn.ts'
 import type { Paradigm } from '../inflect/paradigm.ts'
@@ -117,6 +118,10 @@ export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelH
     finder: new CandidateFinder(paradigms, members, alternations, twinOpts),
     cells: decodeAllCellRules(json.cellRules ?? [], entries, cellsOf, alternations, twinOpts, json.featureNames),
     options: json.options.learn,
+  }
+  // The edit factor is learned again from the stored tables, as learning made it (nothing of it is stored).
+  if (json.options.learn.edits) {
+    inflection.edits = learnEditFactors(entries, paradigms, memberOf, json.options.learn.ranker)
   }
   const corpus = decodeCorpus(json.corpus, inflection.lexicon)
   if (corpus) inflection.corpus = corpus
