@@ -1,11 +1,15 @@
 // Member suffixes per paradigm: how long a word-final string a lemma shares with the paradigm's members.
 
-/** Edges of all nodes in one map, keyed by node × CODE_SPAN + code point (a map per node costs far more). */
-const CODE_SPAN = 0x110000
-
 /** A reversed-letter trie of the member lemmas of one paradigm, with member counts per node. */
 export class SuffixIndex {
-  private readonly edges = new Map<number, number>()
+  /**
+   * Edges of all nodes in one open-addressing table of (node, code point) → child, in typed arrays: a Map
+   * keyed by node × code span needs keys past the small-integer range, and each lookup then allocates.
+   */
+  private edgeNode = new Int32Array(8).fill(-1)
+  private edgeCode = new Int32Array(8)
+  private edgeChild = new Int32Array(8)
+  private edgeCount = 0
   private readonly counts: number[] = [0]
   private readonly ends: number[] = [0]
 
@@ -15,18 +19,51 @@ export class SuffixIndex {
     this.counts[0]!++
     const chars = [...word]
     for (let i = chars.length - 1; i >= 0; i--) {
-      const key = node * CODE_SPAN + chars[i]!.codePointAt(0)!
-      let next = this.edges.get(key)
-      if (next === undefined) {
+      const code = chars[i]!.codePointAt(0)!
+      let next = this.child(node, code)
+      if (next < 0) {
         next = this.counts.length
         this.counts.push(0)
         this.ends.push(0)
-        this.edges.set(key, next)
+        this.link(node, code, next)
       }
       node = next
       this.counts[node]!++
     }
     this.ends[node]!++
+  }
+
+  /** The child of `node` by `code`, or -1. */
+  private child(node: number, code: number): number {
+    const keys = this.edgeNode
+    const mask = keys.length - 1
+    for (let h = slotOf(node, code) & mask; keys[h] !== -1; h = (h + 1) & mask)
+      if (keys[h] === node && this.edgeCode[h] === code) return this.edgeChild[h]!
+    return -1
+  }
+
+  private link(node: number, code: number, next: number): void {
+    if (2 * (this.edgeCount + 1) > this.edgeNode.length) this.grow()
+    this.put(node, code, next)
+    this.edgeCount++
+  }
+
+  private put(node: number, code: number, next: number): void {
+    const keys = this.edgeNode
+    const mask = keys.length - 1
+    let h = slotOf(node, code) & mask
+    while (keys[h] !== -1) h = (h + 1) & mask
+    keys[h] = node
+    this.edgeCode[h] = code
+    this.edgeChild[h] = next
+  }
+
+  private grow(): void {
+    const [nodes, codes, children] = [this.edgeNode, this.edgeCode, this.edgeChild]
+    this.edgeNode = new Int32Array(nodes.length * 2).fill(-1)
+    this.edgeCode = new Int32Array(nodes.length * 2)
+    this.edgeChild = new Int32Array(nodes.length * 2)
+    for (let h = 0; h < nodes.length; h++) if (nodes[h] !== -1) this.put(nodes[h]!, codes[h]!, children[h]!)
   }
 
   /**
@@ -59,8 +96,8 @@ export class SuffixIndex {
     // The excluded member shares the path while its letters from the end are the word's.
     let onPath = out !== null
     for (let i = chars.length - 1; i >= 0; i--) {
-      const next = this.edges.get(node * CODE_SPAN + chars[i]!)
-      if (next === undefined) break
+      const next = this.child(node, chars[i]!)
+      if (next < 0) break
       const d = chars.length - 1 - i
       onPath = onPath && d < out!.length && out![out!.length - 1 - d] === chars[i]
       const c = this.counts[next]! - (onPath ? 1 : 0)
@@ -83,4 +120,9 @@ export function codePoints(word: string): number[] {
   const out: number[] = []
   for (const c of word) out.push(c.codePointAt(0)!)
   return out
+}
+
+function slotOf(node: number, code: number): number {
+  const h = Math.imul(node ^ Math.imul(code, 0x85ebca77), 0x9e3779b1)
+  return h ^ (h >>> 15)
 }
