@@ -2,7 +2,8 @@
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { featureNames as names } from './feature-names.ts'
 import { harmonyClass, harmonyLetters, literalLetters } from './harmony.ts'
-import { matchStems, type Paradigm, stemFit } from './paradigm.ts'
+import { type MatchView, matchView, viewFit, viewStems } from './match-view.ts'
+import type { Paradigm } from './paradigm.ts'
 import { codePoints, SuffixIndex } from './suffix-index.ts'
 import { letterSides, paradigmSide, tiedClasses } from './twins.ts'
 
@@ -46,6 +47,8 @@ export class CandidateFinder {
   private readonly sides: number[]
   private readonly letterSide: Map<string, Record<string, number>>
   private readonly analogyMembers: number[]
+  /** Per paradigm: what matching a lemma reads of it, in records of one shape. */
+  private readonly views: MatchView[]
   /** Per paradigm: whether its mirror image is a paradigm too (a twin, or in the book). */
   private readonly paired: boolean[]
   /** Per UPOS with a swap: the side of each letter that marks a lemma's harmony class (harmony.ts). */
@@ -117,6 +120,7 @@ export class CandidateFinder {
       if (p.twinOf !== undefined) this.partner[p.twinOf] = i
     })
     this.analogyMembers = paradigms.map((_, i) => memberLemmas[i]?.length ?? 0)
+    this.views = paradigms.map(matchView)
     this.suffixes = paradigms.map((_, i) => suffixIndexOf(memberLemmas[i] ?? []))
   }
 
@@ -160,15 +164,14 @@ export class CandidateFinder {
     for (let k = 1; k <= Math.min(4, lower.length - 3); k++) starts.push(lower.slice(0, k))
     const startNames: (string[] | undefined)[] = []
     for (const i of this.applicable(lemma, upos)) {
-      const p = this.paradigms[i]!
-      const first = p.lemma[0]
-      if (typeof first === 'string' && !lemma.startsWith(first)) continue
-      const stems = matchStems(p, lemma)
+      const v = this.views[i]!
+      if (!lemma.startsWith(v.first)) continue
+      const stems = viewStems(v, lemma)
       if (!stems) continue
       const excluded = skip.get(i)
       const leave = excluded === undefined ? false : excluded === lower ? true : codePoints(excluded)
       const sfx = this.suffixes[i]!.longestSharedCodes(codes, leave)
-      const shared = this.sharedFeatures(p, i, sfx, stems, excluded !== undefined)
+      const shared = this.sharedFeatures(v, i, sfx, stems, excluded !== undefined)
       this.sideFeatures(i, lower, cls, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
       const left = this.leftId[i]!
@@ -233,7 +236,7 @@ export class CandidateFinder {
   }
 
   private sharedFeatures(
-    p: Paradigm,
+    p: MatchView,
     index: number,
     { length, count, wholeMember }: { length: number; count: number; wholeMember: boolean },
     stems: string[],
@@ -241,9 +244,9 @@ export class CandidateFinder {
   ): string[] {
     const len = Math.min(length, 8)
     // A twin's size is its original's (its mirrored members).
-    const members = (p.twinOf === undefined ? p.members : this.analogyMembers[index]!) - (self ? 1 : 0)
+    const members = (p.twinOf < 0 ? p.members : this.analogyMembers[index]!) - (self ? 1 : 0)
     const vars = stems.length - (p.openPrefix ? 1 : 0)
-    const deficit = Math.min(6, 6 * vars - stemFit(stems, p.shapes))
+    const deficit = Math.min(6, 6 * vars - viewFit(stems, p))
     const f = [
       names.sfx(len),
       names.sfxCount(len, count),
@@ -253,7 +256,7 @@ export class CandidateFinder {
     if (wholeMember) f.push('whole')
     if (p.openPrefix) f.push(stems[0] ? 'open:used' : 'open:empty')
     if (members <= 0) f.push('orphan')
-    if (p.twinOf !== undefined) f.push('twin', names.twinSfx(len))
+    if (p.twinOf >= 0) f.push('twin', names.twinSfx(len))
     return f
   }
 

@@ -1,7 +1,7 @@
 // Cell rules: for one cell, the lemma → form rewrite of every training table, grouped, and a ranker over them.
 // Factoring a table into its cells lets a lemma combine choices seen in different tables (a prefix from one
 // class, a stem change from another), as in the aligned edit rules of Durrett & DeNero (2013), NAACL.
-import type { Lexicon } from '../lexicon/lexicon.ts'
+import type { Cell, Lexicon } from '../lexicon/lexicon.ts'
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
 import { sampleByClass } from './example-sample.ts'
@@ -13,6 +13,7 @@ import { withPrior } from './prior.ts'
 import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates } from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
 import { TrainMemo } from './ranker-train.ts'
+import { cellColumns, columnHash, sameColumn } from './cell-columns.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
@@ -47,12 +48,12 @@ export function learnCellRules(
     const memo = new TrainMemo()
     // A cell with the same forms as an earlier one in every table (German nominative = accusative plural)
     // has the same rules, examples and weights: copied under its own key rather than learned again.
-    const bySignature = new Map<string, CellRuleModel>()
-    for (const key of keys) {
-      const signature = tables
-        .map((e) => e.cells!.find((c) => c.key === key)?.forms.join('\u0001') ?? '\u0002')
-        .join('\u0003')
-      const alike = bySignature.get(signature)
+    const columns = cellColumns(tables, keys)
+    const bySignature = new Map<number, { column: (Cell | undefined)[]; model: CellRuleModel }[]>()
+    for (const [ki, key] of keys.entries()) {
+      const column = columns[ki]!
+      const signature = columnHash(column)
+      const alike = bySignature.get(signature)?.find((m) => sameColumn(m.column, column))?.model
       if (alike) {
         out.push(relabel(alike, key))
         continue
@@ -62,7 +63,7 @@ export function learnCellRules(
       const order: string[] = []
       const items: { lemma: string; inherent: string; forms: string[]; t: number }[] = []
       for (const [t, e] of tables.entries()) {
-        const cell = e.cells!.find((c) => c.key === key)
+        const cell = column[t]
         if (!cell) continue
         const tp = extractPattern(e.lemma, [cell.forms[0]!])
         const cells = [{ key, forms: [tp.forms[0]!] }]
@@ -151,7 +152,9 @@ export function learnCellRules(
       const weights = memo.train(coder.done(), withPrior(ranker, coder.added, prior))
       if (classOf) weights.classOf = classOf
       const model = { upos, key, rules, weights, finder }
-      bySignature.set(signature, model)
+      const same = bySignature.get(signature)
+      if (same) same.push({ column, model })
+      else bySignature.set(signature, [{ column, model }])
       out.push(model)
     }
   }
