@@ -27,13 +27,18 @@ export class TableGroups<V> {
   }
 }
 
-/** FNV-1a over the forms' code units, with the variant and cell boundaries (cell keys are compared only). */
+/**
+ * FNV-1a over each form's length and last two code units, with the cell boundaries: tables of different
+ * paradigms differ in some ending (equal hashes are compared in full; cell keys are compared only).
+ */
 function tableHash(cells: Cells): number {
   let h = 0x811c9dc5
   for (const c of cells) {
     for (const f of c.forms) {
-      for (let i = 0; i < f.length; i++) h = Math.imul(h ^ f.charCodeAt(i), 0x01000193)
-      h = Math.imul(h ^ 0x1f, 0x01000193)
+      const n = f.length
+      h = Math.imul(h ^ n, 0x01000193)
+      h = Math.imul(h ^ f.charCodeAt(n - 1), 0x01000193)
+      h = Math.imul(h ^ f.charCodeAt(n - 2), 0x01000193)
     }
     h = Math.imul(h ^ 0x1e, 0x01000193)
   }
