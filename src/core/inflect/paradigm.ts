@@ -51,7 +51,7 @@ export interface StemShape {
   maxLength: number
 }
 
-const MAX_MATCHES = 64
+export const MAX_MATCHES = 64
 
 /**
  * Every way a lemma fits a lemma pattern (stem variables non-empty, an open prefix may be empty), greedy first.
@@ -140,7 +140,7 @@ function step(s: typeof searchState, part: number, pos: number): void {
  * matchAll for a pattern with one variable (most rules): literal, variable, literal — one match at most, so
  * no search. Undefined for other patterns.
  */
-function matchSingle(lemma: Pattern, openPrefix: boolean, word: string): string[][] | undefined {
+export function matchSingle(lemma: Pattern, openPrefix: boolean, word: string): string[][] | undefined {
   let at = -1
   for (let i = 0; i < lemma.length; i++) {
     if (typeof lemma[i] !== 'number') continue
@@ -157,7 +157,7 @@ function matchSingle(lemma: Pattern, openPrefix: boolean, word: string): string[
   return [[word.slice(before.length, end)]]
 }
 
-function isHighSurrogate(c: number): boolean {
+export function isHighSurrogate(c: number): boolean {
   return c >= 0xd800 && c <= 0xdbff
 }
 
