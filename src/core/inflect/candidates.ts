@@ -176,7 +176,12 @@ export class CandidateFinder {
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
       const left = this.leftId[i]!
       shared.push(this.leftNames[left]!)
-      for (const name of (startNames[left] ??= this.startNames(left, starts))) shared.push(name)
+      let lefts = startNames[left]
+      if (!lefts) {
+        lefts = this.startNames(left, starts)
+        startNames[left] = lefts
+      }
+      for (const name of lefts) shared.push(name)
       out.push({ paradigm: i, stems, shared, sfx: sfx.length })
     }
     // Relative analogy: how this paradigm's longest shared suffix compares with the best candidate's.

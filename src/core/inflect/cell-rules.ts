@@ -4,8 +4,8 @@
 import type { Cell, Lexicon } from '../lexicon/lexicon.ts'
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
+import { cellColumns, columnHash, sameColumn } from './cell-columns.ts'
 import { sampleByClass } from './example-sample.ts'
-import { stemShapes } from './extract.ts'
 import { type FeatureOptions, lemmaFeatures } from './features.ts'
 import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
 import { extractPattern, fillPattern } from './pattern.ts'
@@ -13,7 +13,7 @@ import { withPrior } from './prior.ts'
 import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates } from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
 import { TrainMemo } from './ranker-train.ts'
-import { cellColumns, columnHash, sameColumn } from './cell-columns.ts'
+import { StemTally } from './stem-tally.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
@@ -58,10 +58,16 @@ export function learnCellRules(
         out.push(relabel(alike, key))
         continue
       }
-      const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: string[][] }>()
+      const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: StemTally }>()
       const own: number[] = []
       const order: string[] = []
-      const items: { lemma: string; inherent: string; forms: string[]; t: number }[] = []
+      // The tables with this cell, by number (their lemma and forms are read from them when needed).
+      const itemTable: number[] = []
+      const item = (i: number) => {
+        const t = itemTable[i]!
+        const e = tables[t]!
+        return { lemma: e.lemma, inherent: e.inherent, forms: column[t]!.forms, t }
+      }
       for (const [t, e] of tables.entries()) {
         const cell = column[t]
         if (!cell) continue
@@ -82,15 +88,15 @@ export function learnCellRules(
             },
             index: order.length,
             lemmas: [],
-            stems: [],
+            stems: new StemTally(),
           }
           groups.set(shape, g)
           order.push(shape)
         }
         g.lemmas.push(e.lemma)
-        g.stems.push(tp.stems)
+        g.stems.add(tp.stems)
         own.push(g.index)
-        items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms, t })
+        itemTable.push(t)
       }
       const seen = order.map((s, i) => {
         const g = groups.get(s)!
@@ -99,7 +105,7 @@ export function learnCellRules(
           id: `${upos}:${key}:${i + 1}`,
           members: g.lemmas.length,
           examples: g.lemmas.slice(0, 3),
-          shapes: stemShapes(g.stems),
+          shapes: g.stems.shapes(),
         }
       })
       const twinned = withTwins(
@@ -130,7 +136,7 @@ export function learnCellRules(
         }
       }
       for (const i of picked) {
-        const it = items[i]!
+        const it = item(i)
         localOf[it.t] ??= lemmaFeatures(it.lemma, it.inherent, features)
         coder.add(example(it, own[i]!, localOf[it.t]!))
       }
@@ -140,7 +146,7 @@ export function learnCellRules(
           rules.flatMap((r, i) => (r.twinOf === undefined ? [] : [[r.twinOf, i] as const])),
         )
         for (const i of picked) {
-          const it = items[i]!
+          const it = item(i)
           const twin = twinOf.get(own[i]!)
           const lemma = mirror(it.lemma, swap)
           if (twin === undefined || lemma === it.lemma) continue

@@ -41,7 +41,7 @@ export const featureNames = {
   /** `sfxc:<length>:<members bucket>`: the bucket of `count` is 0, 1, 2, some (3–9) or many (10+). */
   sfxCount: (len: number, count: number): string =>
     count >= 0 && Number.isInteger(count)
-      ? sfxCount.get(len * COUNT_BUCKETS.length + (count >= 10 ? 4 : count >= 3 ? 3 : count))
+      ? sfxCount.get(len * COUNT_BUCKETS.length + (count >= 10 ? 4 : Math.min(count, 3)))
       : `sfxc:${len}:${count}`,
   /** `size:<log2 bucket>` */
   size: (bucket: number): string => size.get(bucket),

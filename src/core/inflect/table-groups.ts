@@ -62,6 +62,7 @@ function sameTable(a: Cells, b: Cells): boolean {
  */
 export function sameFirstForms(a: Cells, b: Cells): boolean {
   if (a.length !== b.length) return false
-  for (let i = 0; i < a.length; i++) if (a[i]!.key !== b[i]!.key || a[i]!.forms[0] !== b[i]!.forms[0]) return false
+  for (let i = 0; i < a.length; i++)
+    if (a[i]!.key !== b[i]!.key || a[i]!.forms[0] !== b[i]!.forms[0]) return false
   return true
 }
