@@ -1,7 +1,9 @@
 // Candidate paradigms for a lemma: those whose lemma pattern fits it, with the shared ranking features.
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
+import { featureNames as names } from './feature-names.ts'
 import { harmonyClass, harmonyLetters, literalLetters } from './harmony.ts'
-import { matchStems, type Paradigm, stemFit } from './paradigm.ts'
+import { type MatchView, matchView, viewFit, viewStems } from './match-view.ts'
+import type { Paradigm } from './paradigm.ts'
 import { codePoints, SuffixIndex } from './suffix-index.ts'
 import { letterSides, paradigmSide, tiedClasses } from './twins.ts'
 
@@ -36,10 +38,16 @@ export class CandidateFinder {
   private readonly suffixes: SuffixIndex[]
   /** Per paradigm: what its cells put before the stem, as one signature shared by paradigms alike there. */
   private readonly leftEdits: string[]
+  /** Per paradigm: its signature's number; per signature: its feature name, and its names with a lemma start. */
+  private readonly leftId: number[]
+  private readonly leftNames: string[] = []
+  private readonly leftStarts: Map<string, string>[] = []
   /** Per paradigm: the side of the learned swap its literals take (-1: none), and each letter's side. */
   private readonly sides: number[]
   private readonly letterSide: Map<string, Record<string, number>>
   private readonly analogyMembers: number[]
+  /** Per paradigm: what matching a lemma reads of it, in records of one shape. */
+  private readonly views: MatchView[]
   /** Per paradigm: whether its mirror image is a paradigm too (a twin, or in the book). */
   private readonly paired: boolean[]
   /** Per UPOS with a swap: the side of each letter that marks a lemma's harmony class (harmony.ts). */
@@ -64,6 +72,17 @@ export class CandidateFinder {
       this.byEnding.set(p.upos, groups)
     })
     this.leftEdits = paradigms.map(leftEdits)
+    const leftIds = new Map<string, number>()
+    this.leftId = this.leftEdits.map((left) => {
+      let id = leftIds.get(left)
+      if (id === undefined) {
+        id = leftIds.size
+        leftIds.set(left, id)
+        this.leftNames.push(`L:${left}`)
+        this.leftStarts.push(new Map())
+      }
+      return id
+    })
     this.letterSide = new Map(
       Object.entries(alternations).map(([u, swap]) => [
         u,
@@ -100,6 +119,7 @@ export class CandidateFinder {
       if (p.twinOf !== undefined) this.partner[p.twinOf] = i
     })
     this.analogyMembers = paradigms.map((_, i) => memberLemmas[i]?.length ?? 0)
+    this.views = paradigms.map(matchView)
     this.suffixes = paradigms.map((_, i) => suffixIndexOf(memberLemmas[i] ?? []))
   }
 
@@ -141,21 +161,26 @@ export class CandidateFinder {
     const codes = codePoints(lower)
     const starts: string[] = []
     for (let k = 1; k <= Math.min(4, lower.length - 3); k++) starts.push(lower.slice(0, k))
+    const startNames: (string[] | undefined)[] = []
     for (const i of this.applicable(lemma, upos)) {
-      const p = this.paradigms[i]!
-      const first = p.lemma[0]
-      if (typeof first === 'string' && !lemma.startsWith(first)) continue
-      const stems = matchStems(p, lemma)
+      const v = this.views[i]!
+      if (!lemma.startsWith(v.first)) continue
+      const stems = viewStems(v, lemma)
       if (!stems) continue
       const excluded = skip.get(i)
       const leave = excluded === undefined ? false : excluded === lower ? true : codePoints(excluded)
       const sfx = this.suffixes[i]!.longestSharedCodes(codes, leave)
-      const shared = this.sharedFeatures(p, i, sfx, stems, excluded !== undefined)
+      const shared = this.sharedFeatures(v, i, sfx, stems, excluded !== undefined)
       this.sideFeatures(i, lower, cls, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
-      const left = this.leftEdits[i]!
-      shared.push(`L:${left}`)
-      for (const start of starts) shared.push(`L:${left}|${start}`)
+      const left = this.leftId[i]!
+      shared.push(this.leftNames[left]!)
+      let lefts = startNames[left]
+      if (!lefts) {
+        lefts = this.startNames(left, starts)
+        startNames[left] = lefts
+      }
+      for (const name of lefts) shared.push(name)
       out.push({ paradigm: i, stems, shared, sfx: sfx.length })
     }
     // Relative analogy: how this paradigm's longest shared suffix compares with the best candidate's.
@@ -167,9 +192,22 @@ export class CandidateFinder {
     }
     for (const c of out) {
       const gap = Math.max(-4, Math.min(4, c.sfx - (c.sfx === best ? second : best)))
-      c.shared.push(`rel:${gap}`, `rel:${gap}:${Math.min(c.sfx, 8)}`)
+      c.shared.push(names.rel(gap), names.relLength(gap, Math.min(c.sfx, 8)))
     }
     return out
+  }
+
+  /** The names `L:<left edits>|<start>` of a left-edit signature with each of a lemma's starts (made once). */
+  private startNames(left: number, starts: readonly string[]): string[] {
+    const known = this.leftStarts[left]!
+    return starts.map((start) => {
+      let name = known.get(start)
+      if (name === undefined) {
+        name = `${this.leftNames[left]}|${start}`
+        known.set(start, name)
+      }
+      return name
+    })
   }
 
   /**
@@ -202,28 +240,27 @@ export class CandidateFinder {
   }
 
   private sharedFeatures(
-    p: Paradigm,
+    p: MatchView,
     index: number,
     { length, count, wholeMember }: { length: number; count: number; wholeMember: boolean },
     stems: string[],
     self: boolean,
   ): string[] {
     const len = Math.min(length, 8)
-    const bucket = count >= 10 ? 'many' : count >= 3 ? 'some' : String(count)
     // A twin's size is its original's (its mirrored members).
-    const members = (p.twinOf === undefined ? p.members : this.analogyMembers[index]!) - (self ? 1 : 0)
+    const members = (p.twinOf < 0 ? p.members : this.analogyMembers[index]!) - (self ? 1 : 0)
     const vars = stems.length - (p.openPrefix ? 1 : 0)
-    const deficit = Math.min(6, 6 * vars - stemFit(stems, p.shapes))
+    const deficit = Math.min(6, 6 * vars - viewFit(stems, p))
     const f = [
-      `sfx:${len}`,
-      `sfxc:${len}:${bucket}`,
-      `size:${Math.floor(Math.log2(members + 1))}`,
-      `fit:${deficit}`,
+      names.sfx(len),
+      names.sfxCount(len, count),
+      names.size(Math.floor(Math.log2(members + 1))),
+      names.fit(deficit),
     ]
     if (wholeMember) f.push('whole')
-    if (p.openPrefix) f.push(`open:${stems[0] ? 'used' : 'empty'}`)
+    if (p.openPrefix) f.push(stems[0] ? 'open:used' : 'open:empty')
     if (members <= 0) f.push('orphan')
-    if (p.twinOf !== undefined) f.push('twin', `twin:sfx:${len}`)
+    if (p.twinOf >= 0) f.push('twin', names.twinSfx(len))
     return f
   }
 

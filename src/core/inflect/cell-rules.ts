@@ -1,13 +1,13 @@
 // Cell rules: for one cell, the lemma → form rewrite of every training table, grouped, and a ranker over them.
 // Factoring a table into its cells lets a lemma combine choices seen in different tables (a prefix from one
 // class, a stem change from another), as in the aligned edit rules of Durrett & DeNero (2013), NAACL.
-import type { Lexicon } from '../lexicon/lexicon.ts'
+import type { Cell, Lexicon } from '../lexicon/lexicon.ts'
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
 import type { ModifierFilter } from './compound-prefix.ts'
 import { type EditFactor, reweigh, ruleLeadP } from './edit-factor.ts'
+import { cellColumns, columnHash, sameColumn } from './cell-columns.ts'
 import { sampleByClass } from './example-sample.ts'
-import { stemShapes } from './extract.ts'
 import { type FeatureOptions, lemmaFeatures } from './features.ts'
 import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
 import { extractPattern, fillPattern } from './pattern.ts'
@@ -15,6 +15,7 @@ import { withPrior } from './prior.ts'
 import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates } from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
 import { TrainMemo } from './ranker-train.ts'
+import { StemTally } from './stem-tally.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
@@ -50,22 +51,28 @@ export function learnCellRules(
     const memo = new TrainMemo()
     // A cell with the same forms as an earlier one in every table (German nominative = accusative plural)
     // has the same rules, examples and weights: copied under its own key rather than learned again.
-    const bySignature = new Map<string, CellRuleModel>()
-    for (const key of keys) {
-      const signature = tables
-        .map((e) => e.cells!.find((c) => c.key === key)?.forms.join('\u0001') ?? '\u0002')
-        .join('\u0003')
-      const alike = bySignature.get(signature)
+    const columns = cellColumns(tables, keys)
+    const bySignature = new Map<number, { column: (Cell | undefined)[]; model: CellRuleModel }[]>()
+    for (const [ki, key] of keys.entries()) {
+      const column = columns[ki]!
+      const signature = columnHash(column)
+      const alike = bySignature.get(signature)?.find((m) => sameColumn(m.column, column))?.model
       if (alike) {
         out.push(relabel(alike, key))
         continue
       }
-      const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: string[][] }>()
+      const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: StemTally }>()
       const own: number[] = []
       const order: string[] = []
-      const items: { lemma: string; inherent: string; forms: string[]; t: number }[] = []
+      // The tables with this cell, by number (their lemma and forms are read from them when needed).
+      const itemTable: number[] = []
+      const item = (i: number) => {
+        const t = itemTable[i]!
+        const e = tables[t]!
+        return { lemma: e.lemma, inherent: e.inherent, forms: column[t]!.forms, t }
+      }
       for (const [t, e] of tables.entries()) {
-        const cell = e.cells!.find((c) => c.key === key)
+        const cell = column[t]
         if (!cell) continue
         const tp = extractPattern(e.lemma, [cell.forms[0]!])
         const cells = [{ key, forms: [tp.forms[0]!] }]
@@ -84,15 +91,15 @@ export function learnCellRules(
             },
             index: order.length,
             lemmas: [],
-            stems: [],
+            stems: new StemTally(),
           }
           groups.set(shape, g)
           order.push(shape)
         }
         g.lemmas.push(e.lemma)
-        g.stems.push(tp.stems)
+        g.stems.add(tp.stems)
         own.push(g.index)
-        items.push({ lemma: e.lemma, inherent: e.inherent, forms: cell.forms, t })
+        itemTable.push(t)
       }
       const seen = order.map((s, i) => {
         const g = groups.get(s)!
@@ -101,7 +108,7 @@ export function learnCellRules(
           id: `${upos}:${key}:${i + 1}`,
           members: g.lemmas.length,
           examples: g.lemmas.slice(0, 3),
-          shapes: stemShapes(g.stems),
+          shapes: g.stems.shapes(),
         }
       })
       const twinned = withTwins(
@@ -132,7 +139,7 @@ export function learnCellRules(
         }
       }
       for (const i of picked) {
-        const it = items[i]!
+        const it = item(i)
         localOf[it.t] ??= modifiers
           ? modifiers.apply(it.lemma, upos, lemmaFeatures(it.lemma, it.inherent, features))
           : lemmaFeatures(it.lemma, it.inherent, features)
@@ -144,7 +151,7 @@ export function learnCellRules(
           rules.flatMap((r, i) => (r.twinOf === undefined ? [] : [[r.twinOf, i] as const])),
         )
         for (const i of picked) {
-          const it = items[i]!
+          const it = item(i)
           const twin = twinOf.get(own[i]!)
           const lemma = mirror(it.lemma, swap)
           if (twin === undefined || lemma === it.lemma) continue
@@ -156,7 +163,9 @@ export function learnCellRules(
       const weights = memo.train(coder.done(), withPrior(ranker, coder.added, prior))
       if (classOf) weights.classOf = classOf
       const model = { upos, key, rules, weights, finder }
-      bySignature.set(signature, model)
+      const same = bySignature.get(signature)
+      if (same) same.push({ column, model })
+      else bySignature.set(signature, [{ column, model }])
       out.push(model)
     }
   }

@@ -51,7 +51,7 @@ export interface StemShape {
   maxLength: number
 }
 
-const MAX_MATCHES = 64
+export const MAX_MATCHES = 64
 
 /**
  * Every way a lemma fits a lemma pattern (stem variables non-empty, an open prefix may be empty), greedy first.
@@ -60,31 +60,61 @@ const MAX_MATCHES = 64
 export function matchAll(lemma: Pattern, openPrefix: boolean, word: string): string[][] {
   const single = matchSingle(lemma, openPrefix, word)
   if (single !== undefined) return single
-  const search: Search = { lemma, openPrefix, word, out: [], stems: [], dead: null }
+  const search = searchState
+  search.lemma = lemma
+  search.openPrefix = openPrefix
+  search.word = word
+  search.out = []
+  search.vars = 0
+  for (const p of lemma) if (typeof p === 'number' && p >= search.vars) search.vars = p + 1
+  const states = (lemma.length + 1) * (word.length + 1)
+  if (states > search.dead.length) search.dead = new Int32Array(2 * states)
+  if (search.vars > search.from.length) {
+    search.from = new Int32Array(2 * search.vars)
+    search.to = new Int32Array(2 * search.vars)
+  }
+  search.call = (search.call + 1) | 0
+  if (search.call === 0) {
+    search.dead.fill(0)
+    search.call = 1
+  }
   step(search, 0, 0)
-  return search.out
+  const out = search.out
+  search.out = []
+  search.word = ''
+  return out
 }
 
-/** The state of one matchAll search. */
-interface Search {
-  lemma: Pattern
-  openPrefix: boolean
-  word: string
-  out: string[][]
-  stems: string[]
-  /** (part, position) pairs known to lead to no match: without this, many adjacent variables are exponential. */
-  dead: Set<number> | null
+/**
+ * The state of one matchAll search, reused by every search (matching is synchronous): the stem bounds so
+ * far, and the (part, position) pairs known to lead to no match, marked with the search's number — without
+ * them, many adjacent variables are exponential.
+ */
+const searchState = {
+  lemma: [] as Pattern,
+  openPrefix: false,
+  word: '',
+  out: [] as string[][],
+  vars: 0,
+  from: new Int32Array(8),
+  to: new Int32Array(8),
+  dead: new Int32Array(256),
+  call: 0,
 }
 
-function step(s: Search, part: number, pos: number): void {
-  const { lemma, word, out, stems } = s
+function step(s: typeof searchState, part: number, pos: number): void {
+  const { lemma, word, out } = s
   const n = word.length
   if (out.length >= MAX_MATCHES) return
   const state = part * (n + 1) + pos
-  if (s.dead?.has(state)) return
+  if (s.dead[state] === s.call) return
   const before = out.length
   if (part === lemma.length) {
-    if (pos === n) out.push(stems.slice())
+    if (pos === n) {
+      const stems: string[] = []
+      for (let v = 0; v < s.vars; v++) stems.push(word.slice(s.from[v]!, s.to[v]!))
+      out.push(stems)
+    }
   } else {
     const p = lemma[part]!
     if (typeof p === 'string') {
@@ -97,19 +127,20 @@ function step(s: Search, part: number, pos: number): void {
         if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
         if (typeof next === 'string' && !word.startsWith(next, end)) continue
         if (next === undefined && end !== n) continue
-        stems[p] = word.slice(pos, end)
+        s.from[p] = pos
+        s.to[p] = end
         step(s, part + 1, end)
       }
     }
   }
-  if (out.length === before) (s.dead ??= new Set()).add(state)
+  if (out.length === before) s.dead[state] = s.call
 }
 
 /**
  * matchAll for a pattern with one variable (most rules): literal, variable, literal — one match at most, so
  * no search. Undefined for other patterns.
  */
-function matchSingle(lemma: Pattern, openPrefix: boolean, word: string): string[][] | undefined {
+export function matchSingle(lemma: Pattern, openPrefix: boolean, word: string): string[][] | undefined {
   let at = -1
   for (let i = 0; i < lemma.length; i++) {
     if (typeof lemma[i] !== 'number') continue
@@ -126,7 +157,7 @@ function matchSingle(lemma: Pattern, openPrefix: boolean, word: string): string[
   return [[word.slice(before.length, end)]]
 }
 
-function isHighSurrogate(c: number): boolean {
+export function isHighSurrogate(c: number): boolean {
   return c >= 0xd800 && c <= 0xdbff
 }
 

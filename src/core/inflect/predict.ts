@@ -7,6 +7,7 @@ import { lemmaFeatures } from './features.ts'
 import type { InflectionModel } from './learn.ts'
 import { fillPattern } from './pattern.ts'
 import { scoreCandidates } from './ranker.ts'
+import { sameFirstForms, TableGroups } from './table-groups.ts'
 
 /** One predicted table: a score and the forms of each cell (variants in order). */
 export interface PredictedTable {
@@ -48,16 +49,20 @@ function rankTables(
     const d = editDistribution(factor, lemma)
     reweigh(probs, found.map((c) => d[model.edits!.classOf[c.paradigm]!]!), model.options.edits?.weight ?? 1)
   }
-  const tables = new Map<string, { table: PredictedTable; best: number }>()
+  // Paradigms that give the same forms are one table (grouped by forms, in order of first appearance).
+  const groups = new TableGroups<{ table: PredictedTable; best: number }>()
+  const tables: { table: PredictedTable; best: number }[] = []
   found.forEach((c, i) => {
     const p = model.book.paradigms[c.paradigm]!
     const cells = p.cells.map((cell) => ({ key: cell.key, forms: cell.forms.map((f) => fillPattern(f, c.stems)) }))
     if (cells.some((cell) => cell.forms.some((f) => f.length === 0))) return
-    const key = cells.map((cell) => `${cell.key}=${cell.forms.join(',')}`).join('\n')
     const prob = probs[i]!
-    const t = tables.get(key)
-    if (!t) tables.set(key, { table: { paradigm: p.id, score: prob, cells }, best: prob })
-    else {
+    const t = groups.get(cells)
+    if (!t) {
+      const entry = { table: { paradigm: p.id, score: prob, cells }, best: prob }
+      groups.set(cells, entry)
+      tables.push(entry)
+    } else {
       t.table.score += prob
       if (prob > t.best) {
         t.best = prob
@@ -65,7 +70,7 @@ function rankTables(
       }
     }
   })
-  let ranked = [...tables.values()].map((t) => t.table)
+  let ranked = tables.map((t) => t.table)
   const z = ranked.reduce((a, t) => a + t.score, 0)
   for (const t of ranked) t.score = z > 0 ? t.score / z : 0
   const dists = cellDistributions(model, lemma, upos, inherent)
@@ -182,8 +187,7 @@ function combineWithCells(
     composed: true,
     cells: cellOrder.filter((k) => dists.has(k)).map((key) => ({ key, forms: [argmax(dists.get(key)!)] })),
   }
-  const sig = (t: PredictedTable) => t.cells.map((c) => `${c.key}=${c.forms[0]}`).join('\n')
-  const all = tables.some((t) => sig(t) === sig(composed)) ? tables : [...tables, composed]
+  const all = tables.some((t) => sameFirstForms(t.cells, composed.cells)) ? tables : [...tables, composed]
   const logits = all.map((t) => {
     let sum = 0
     let n = 0
@@ -198,7 +202,11 @@ function combineWithCells(
   const max = Math.max(...logits)
   const e = logits.map((x) => Math.exp(x - max))
   const zz = e.reduce((a, b) => a + b, 0)
-  return all.map((t, i) => ({ ...t, score: e[i]! / zz }))
+  // The tables are this prediction's own objects (made in rankTables): rescored in place.
+  all.forEach((t, i) => {
+    t.score = e[i]! / zz
+  })
+  return all
 }
 
 function argmax(d: Map<string, number>): string {

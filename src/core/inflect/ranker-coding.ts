@@ -39,55 +39,56 @@ class IntList {
   }
 }
 
-/** (feature id, class) → weight slot, by open addressing (a Map keyed by a combined number is far slower). */
+/**
+ * (feature id, class) → weight slot, by open addressing (a Map keyed by a combined number is far slower);
+ * each entry's feature, class and slot lie side by side, so a probe touches one cache line.
+ */
 class PairSlots {
-  private keysF = new Int32Array(1 << 12).fill(-1)
-  private keysC = new Int32Array(1 << 12)
-  private values = new Int32Array(1 << 12)
+  /** Entry h at 3h: feature (-1: empty), class, slot. */
+  private table = new Int32Array(3 << 12).fill(-1)
+  private bits = 12
   readonly feature = new IntList()
   readonly cls = new IntList()
 
   slot(f: number, c: number): number {
-    let mask = this.keysF.length - 1
-    let h = (Math.imul(f, 0x9e3779b1) ^ Math.imul(c, 0x85ebca77)) & mask
-    while (this.keysF[h] !== -1) {
-      if (this.keysF[h] === f && this.keysC[h] === c) return this.values[h]!
-      h = (h + 1) & mask
-    }
+    const t = this.table
+    const mask = (1 << this.bits) - 1
+    let h = pairHash(f, c, this.bits)
+    for (; t[3 * h] !== -1; h = (h + 1) & mask) if (t[3 * h] === f && t[3 * h + 1] === c) return t[3 * h + 2]!
     const s = this.feature.length
     this.feature.push(f)
     this.cls.push(c)
-    if (2 * (s + 1) > this.keysF.length) {
+    if (2 * (s + 1) > 1 << this.bits) {
       this.grow()
-      mask = this.keysF.length - 1
-      h = (Math.imul(f, 0x9e3779b1) ^ Math.imul(c, 0x85ebca77)) & mask
-      while (this.keysF[h] !== -1) h = (h + 1) & mask
+      this.put(f, c, s)
+    } else {
+      t[3 * h] = f
+      t[3 * h + 1] = c
+      t[3 * h + 2] = s
     }
-    this.keysF[h] = f
-    this.keysC[h] = c
-    this.values[h] = s
     return s
   }
 
-  private grow(): void {
-    const size = this.keysF.length * 2
-    const mask = size - 1
-    const kf = new Int32Array(size).fill(-1)
-    const kc = new Int32Array(size)
-    const vs = new Int32Array(size)
-    for (let s = 0; s < this.feature.length - 1; s++) {
-      const f = this.feature.data[s]!
-      const c = this.cls.data[s]!
-      let h = (Math.imul(f, 0x9e3779b1) ^ Math.imul(c, 0x85ebca77)) & mask
-      while (kf[h] !== -1) h = (h + 1) & mask
-      kf[h] = f
-      kc[h] = c
-      vs[h] = s
-    }
-    this.keysF = kf
-    this.keysC = kc
-    this.values = vs
+  private put(f: number, c: number, s: number): void {
+    const t = this.table
+    const mask = (1 << this.bits) - 1
+    let h = pairHash(f, c, this.bits)
+    while (t[3 * h] !== -1) h = (h + 1) & mask
+    t[3 * h] = f
+    t[3 * h + 1] = c
+    t[3 * h + 2] = s
   }
+
+  private grow(): void {
+    this.bits++
+    this.table = new Int32Array(3 << this.bits).fill(-1)
+    for (let s = 0; s < this.feature.length - 1; s++) this.put(this.feature.data[s]!, this.cls.data[s]!, s)
+  }
+}
+
+/** The top `bits` bits of a multiplicative hash of (feature, class). */
+function pairHash(f: number, c: number, bits: number): number {
+  return (Math.imul(f, 0x9e3779b1) ^ Math.imul(c, 0x85ebca77)) >>> (32 - bits)
 }
 
 /**

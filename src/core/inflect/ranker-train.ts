@@ -28,9 +28,10 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
   const rand = mulberry32(opts.seed)
   const order = Array.from({ length: count }, (_, i) => i)
   const { rate, l2 } = opts
-  const { start, width, ids, candStart, gold } = c
-  // Slots outside the supported set (see RankerOptions.support) stay 0: never updated, never written.
-  const allowed = supportedSlots(c, opts, count)
+  const { start, gold } = c
+  // Slots outside the supported set (see RankerOptions.support) stay 0: never updated, never written, so they
+  // are left out of the candidates' slot lists (adding a zero weight changes no score).
+  const { candStart, localCount, ids } = trainable(c, supportedSlots(c, opts, count))
   const scores = new Float64Array(c.maxCandidates)
   const p = new Float64Array(c.maxCandidates)
   for (let epoch = 0; epoch < opts.epochs; epoch++) {
@@ -44,15 +45,15 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
       const idx = order[o]!
       const c0 = start[idx]!
       const n = start[idx + 1]! - c0
-      const nl = width[idx]!
-      // Candidate i's ids start at candStart[c0 + i]: its local weight slots (nl), then its shared features.
+      // Candidate i's ids start at candStart[c0 + i]: its local weight slots (localCount), then its shared features.
       let max = Number.NEGATIVE_INFINITY
       for (let i = 0; i < n; i++) {
         const base = candStart[c0 + i]!
+        const l1 = base + localCount[c0 + i]!
         let v = 0
-        for (let j = 0; j < nl; j++) v += wl[ids[base + j]!]!
+        for (let k = base; k < l1; k++) v += wl[ids[k]!]!
         const s1 = candStart[c0 + i + 1]!
-        for (let k = base + nl; k < s1; k++) v += ws[ids[k]!]!
+        for (let k = l1; k < s1; k++) v += ws[ids[k]!]!
         scores[i] = v
         if (v > max) max = v
       }
@@ -72,15 +73,15 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
         const grad = p[i]! - (gold[c0 + i] ? p[i]! / zg : 0)
         if (Math.abs(grad) < 1e-6) continue
         const base = candStart[c0 + i]!
-        for (let j = 0; j < nl; j++) {
-          const k = ids[base + j]!
-          if (allowed && !allowed[k]) continue
+        const l1 = base + localCount[c0 + i]!
+        for (let j = base; j < l1; j++) {
+          const k = ids[j]!
           const g = grad + l2 * wl[k]!
           gl[k]! += g * g
           wl[k]! -= (rate * g) / Math.sqrt(gl[k]! + 1e-8)
         }
         const s1 = candStart[c0 + i + 1]!
-        for (let s = base + nl; s < s1; s++) {
+        for (let s = l1; s < s1; s++) {
           const f = ids[s]!
           const g = grad + l2 * ws[f]!
           gs[f]! += g * g
@@ -92,18 +93,43 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
   const out: RankerWeights = { local: new Map(), shared: new Map() }
   const prune = count >= (opts.pruneFrom ?? 0) ? (opts.prune ?? 0) : 0
   const { pairFeature, pairClass, localNames } = c
-  const bySlot = Array.from({ length: c.pairCount }, (_, s) => s).sort(
-    (a, b) => pairFeature[a]! - pairFeature[b]! || pairClass[a]! - pairClass[b]!,
-  ) // feature order, then class
-  for (const s of bySlot) {
-    const v = wl[s]!
-    if (v !== 0 && Math.abs(v) >= prune)
-      out.local.set(`${localNames[pairFeature[s]!]}\u0000${pairClass[s]}`, v)
-  }
+  const kept: number[] = []
+  for (let s = 0; s < c.pairCount; s++) if (wl[s] !== 0 && Math.abs(wl[s]!) >= prune) kept.push(s)
+  kept.sort((a, b) => pairFeature[a]! - pairFeature[b]! || pairClass[a]! - pairClass[b]!) // feature order, then class
+  for (const s of kept) out.local.set(`${localNames[pairFeature[s]!]}\u0000${pairClass[s]}`, wl[s]!)
   c.sharedNames.forEach((f, fi) => {
     if (ws[fi] !== 0) out.shared.set(f, ws[fi]!)
   })
   return out
+}
+
+/**
+ * The candidates' id lists with the slots that may not learn left out: candidate c's ids start at
+ * candStart[c], its first localCount[c] are its local weight slots, the rest up to candStart[c + 1] its
+ * shared features. Without a mask, the coded lists as they are.
+ */
+function trainable(
+  c: CodedExamples,
+  allowed: Uint8Array | null,
+): { candStart: Int32Array; localCount: Int32Array; ids: Int32Array } {
+  const cands = c.candStart.length - 1
+  const localCount = new Int32Array(cands)
+  const examples = c.start.length - 1
+  for (let e = 0; e < examples; e++) localCount.fill(c.width[e]!, c.start[e]!, c.start[e + 1]!)
+  if (!allowed) return { candStart: c.candStart, localCount, ids: c.ids }
+  const candStart = new Int32Array(cands + 1)
+  const ids = new Int32Array(c.ids.length)
+  let at = 0
+  for (let k = 0; k < cands; k++) {
+    candStart[k] = at
+    const base = c.candStart[k]!
+    const l1 = base + localCount[k]!
+    for (let j = base; j < l1; j++) if (allowed[c.ids[j]!]) ids[at++] = c.ids[j]!
+    localCount[k] = at - candStart[k]!
+    for (let j = l1; j < c.candStart[k + 1]!; j++) ids[at++] = c.ids[j]!
+  }
+  candStart[cands] = at
+  return { candStart, localCount, ids: ids.subarray(0, at) }
 }
 
 /**

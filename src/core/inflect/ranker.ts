@@ -97,7 +97,10 @@ export function scoreCandidates(
 ): number[] {
   const byFeature = featureIndex(w)
   const n = candidates.length
-  const s = new Float64Array(n)
+  // Scores in a scratch buffer reused across calls (a fresh typed array per call is memory outside the heap).
+  if (n > scoreScratch.length) scoreScratch = new Float64Array(2 * n)
+  const s = scoreScratch
+  s.fill(0, 0, n)
   const cls = w.classOf ? candidates.map((c) => w.classOf![c] ?? c) : candidates
   const at = positionsByClass(cls)
   const { start, cls: classOfWeight, weight } = byFeature
@@ -122,8 +125,10 @@ export function scoreCandidates(
     }
   }
   for (let i = 0; i < n; i++) for (const f of shared[i]!) s[i]! += w.shared.get(f) ?? 0
-  return softmax(s)
+  return softmax(s, n)
 }
+
+let scoreScratch = new Float64Array(256)
 
 /** Candidate positions by class, in scratch arrays reused across calls (valid where stamp[c] === call). */
 const scratch = { call: 0, stamp: new Int32Array(64), head: new Int32Array(64), next: new Int32Array(64) }
@@ -189,17 +194,19 @@ function featureIndex(w: RankerWeights): FeatureIndex {
   return index
 }
 
-function softmax(s: ArrayLike<number>): number[] {
+/** Softmax of the first `n` scores. */
+function softmax(s: ArrayLike<number>, n: number): number[] {
   let max = Number.NEGATIVE_INFINITY
-  for (let i = 0; i < s.length; i++) max = Math.max(max, s[i]!)
+  for (let i = 0; i < n; i++) max = Math.max(max, s[i]!)
   const e: number[] = []
   let z = 0
-  for (let i = 0; i < s.length; i++) {
+  for (let i = 0; i < n; i++) {
     const x = Math.exp(s[i]! - max)
     e.push(x)
     z += x
   }
-  return e.map((x) => x / z)
+  for (let i = 0; i < n; i++) e[i] = e[i]! / z
+  return e
 }
 
 /** A small seeded generator (mulberry32), so training is deterministic everywhere. */

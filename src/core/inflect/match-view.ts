@@ -1,0 +1,182 @@
+// A paradigm as candidate search reads it: its lemma pattern, stem shapes and sizes in one record of one
+// shape (paradigms and cell rules are objects of several shapes), and the best stem split without cutting
+// out the others.
+import { isHighSurrogate, MAX_MATCHES, matchSingle, type Paradigm, type StemShape } from './paradigm.ts'
+import type { Pattern } from './pattern.ts'
+
+/** A stem shape as StemShape. */
+interface ShapeView {
+  seen: readonly string[]
+  first: string
+  last: string
+  minLength: number
+  maxLength: number
+}
+
+/** What finding candidates needs of one paradigm. */
+export interface MatchView {
+  lemma: Pattern
+  openPrefix: boolean
+  /** The literal the lemma pattern starts with, or '' when it starts with a stem. */
+  first: string
+  shapes: ShapeView[] | null
+  members: number
+  /** The paradigm it mirrors (twins.ts), or -1. */
+  twinOf: number
+}
+
+/**
+ * The match view of a paradigm.
+ * @example matchView(p).first // 'ge' for a lemma pattern ['ge', 0, 'en']
+ */
+export function matchView(p: Paradigm): MatchView {
+  const head = p.lemma[0]
+  return {
+    lemma: p.lemma,
+    openPrefix: p.openPrefix,
+    first: typeof head === 'string' ? head : '',
+    shapes: p.shapes ? p.shapes.map(shapeView) : null,
+    members: p.members,
+    twinOf: p.twinOf ?? -1,
+  }
+}
+
+function shapeView(s: StemShape): ShapeView {
+  return { seen: s.seen, first: s.first, last: s.last, minLength: s.minLength, maxLength: s.maxLength }
+}
+
+/**
+ * How well stem contents fit what the paradigm's members had: stemFit of paradigm.ts on a view.
+ * @example viewFit(['Kan', 'l'], matchView(p)) // 4
+ */
+export function viewFit(stems: readonly string[], v: MatchView): number {
+  const shapes = v.shapes
+  if (!shapes) return 0
+  let fit = 0
+  for (let i = 0; i < stems.length; i++) {
+    const s = stems[i]!
+    const sh = shapes[i]
+    if (!sh) continue
+    if (s.length >= 2 && sh.seen.includes(s)) fit += 3
+    if (s.length >= sh.minLength && s.length <= sh.maxLength) fit += 1
+    if (s && sh.first.includes(s[0]!)) fit += 1
+    if (s && sh.last.includes(s[s.length - 1]!)) fit += 1
+  }
+  return fit
+}
+
+/**
+ * The stem contents of a lemma under a paradigm (the best-fitting match), or null: matchStems on a view.
+ * The ways to match are searched as matchAll does, in its order and up to its bound, but each is scored
+ * by its stem bounds as it is found, and only the best is cut out of the lemma.
+ * @example viewStems(matchView(p), 'Mantel') // ['Mant', 'l']
+ */
+export function viewStems(v: MatchView, lemma: string): string[] | null {
+  const single = matchSingle(v.lemma, v.openPrefix, lemma)
+  if (single !== undefined) return single[0] ?? null
+  const s = search
+  s.view = v
+  s.word = lemma
+  s.found = 0
+  s.vars = 0
+  for (const p of v.lemma) if (typeof p === 'number' && p >= s.vars) s.vars = p + 1
+  const states = (v.lemma.length + 1) * (lemma.length + 1)
+  if (states > s.dead.length) s.dead = new Int32Array(2 * states)
+  if (s.vars > s.from.length) {
+    s.from = new Int32Array(2 * s.vars)
+    s.to = new Int32Array(2 * s.vars)
+    s.bestFrom = new Int32Array(2 * s.vars)
+    s.bestTo = new Int32Array(2 * s.vars)
+  }
+  s.call = (s.call + 1) | 0
+  if (s.call === 0) {
+    s.dead.fill(0)
+    s.call = 1
+  }
+  step(s, 0, 0)
+  s.word = ''
+  if (s.found === 0) return null
+  const stems: string[] = []
+  for (let i = 0; i < s.vars; i++) stems.push(lemma.slice(s.bestFrom[i]!, s.bestTo[i]!))
+  return stems
+}
+
+/** The state of one viewStems search, reused (matching is synchronous); `dead` as in paradigm.ts. */
+const search = {
+  view: null as unknown as MatchView,
+  word: '',
+  found: 0,
+  vars: 0,
+  bestFit: 0,
+  from: new Int32Array(8),
+  to: new Int32Array(8),
+  bestFrom: new Int32Array(8),
+  bestTo: new Int32Array(8),
+  dead: new Int32Array(256),
+  call: 0,
+}
+
+function step(s: typeof search, part: number, pos: number): void {
+  const { view, word } = s
+  const lemma = view.lemma
+  const n = word.length
+  if (s.found >= MAX_MATCHES) return
+  const state = part * (n + 1) + pos
+  if (s.dead[state] === s.call) return
+  const before = s.found
+  if (part === lemma.length) {
+    if (pos === n) found(s)
+  } else {
+    const p = lemma[part]!
+    if (typeof p === 'string') {
+      if (word.startsWith(p, pos)) step(s, part + 1, pos + p.length)
+    } else {
+      const min = p === 0 && view.openPrefix ? 0 : 1
+      // A variable followed by a literal can only end where that literal starts.
+      const next = lemma[part + 1]
+      for (let end = n; end >= pos + min; end--) {
+        if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
+        if (typeof next === 'string' && !word.startsWith(next, end)) continue
+        if (next === undefined && end !== n) continue
+        s.from[p] = pos
+        s.to[p] = end
+        step(s, part + 1, end)
+      }
+    }
+  }
+  if (s.found === before) s.dead[state] = s.call
+}
+
+/** A complete match: kept when it is the first or fits better than the best so far (viewFit, by bounds). */
+function found(s: typeof search): void {
+  const shapes = s.view.shapes
+  let fit = 0
+  if (shapes) {
+    const word = s.word
+    for (let i = 0; i < s.vars; i++) {
+      const sh = shapes[i]
+      if (!sh) continue
+      const a = s.from[i]!
+      const b = s.to[i]!
+      const len = b - a
+      if (len >= 2 && seenAt(sh.seen, word, a, len)) fit += 3
+      if (len >= sh.minLength && len <= sh.maxLength) fit += 1
+      if (len > 0 && sh.first.includes(word[a]!)) fit += 1
+      if (len > 0 && sh.last.includes(word[b - 1]!)) fit += 1
+    }
+  }
+  if (s.found === 0 || fit > s.bestFit) {
+    s.bestFit = fit
+    for (let i = 0; i < s.vars; i++) {
+      s.bestFrom[i] = s.from[i]!
+      s.bestTo[i] = s.to[i]!
+    }
+  }
+  s.found++
+}
+
+/** Whether some seen content is the `len` code units of `word` from `at` (no substring made). */
+function seenAt(seen: readonly string[], word: string, at: number, len: number): boolean {
+  for (const x of seen) if (x.length === len && word.startsWith(x, at)) return true
+  return false
+}
