@@ -142,7 +142,9 @@ export function learnEditFactors(
     own.forEach((i, k) => {
       classOf[i] = ec.classOf[k]!
     })
-    const rows = entries.flatMap((e, i) => (e.upos === upos && e.cells && memberOf[i]! >= 0 ? [i] : []))
+    // A member of a paradigm is an entry with its own table (a bare lemma is a member of none): reading its
+    // cells, which a model head may decode on every read, is not needed to know that.
+    const rows = entries.flatMap((e, i) => (e.upos === upos && memberOf[i]! >= 0 ? [i] : []))
     const lemmas = rows.map((i) => entries[i]!.lemma)
     const factor = trainEditFactor(
       lemmas,
