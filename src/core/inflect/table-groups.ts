@@ -1,4 +1,5 @@
 // Candidate tables grouped by their forms: paradigms that give a lemma the same table are one table.
+import { sameCells } from '../lexicon/lexicon.ts'
 
 /** A table as prediction makes it: cells in order, each with its variants in order. */
 type Cells = readonly { key: string; forms: readonly string[] }[]
@@ -14,7 +15,7 @@ export class TableGroups<V> {
   /** The value stored for a table with the same cells (keys and variants, in order), if any. */
   get(cells: Cells): V | undefined {
     const list = this.byHash.get(tableHash(cells))
-    if (list) for (const t of list) if (sameTable(t.cells, cells)) return t.value
+    if (list) for (const t of list) if (sameCells(t.cells, cells)) return t.value
     return undefined
   }
 
@@ -43,17 +44,6 @@ function tableHash(cells: Cells): number {
     h = Math.imul(h ^ 0x1e, 0x01000193)
   }
   return h
-}
-
-function sameTable(a: Cells, b: Cells): boolean {
-  if (a.length !== b.length) return false
-  for (let i = 0; i < a.length; i++) {
-    const x = a[i]!
-    const y = b[i]!
-    if (x.key !== y.key || x.forms.length !== y.forms.length) return false
-    for (let k = 0; k < x.forms.length; k++) if (x.forms[k] !== y.forms[k]) return false
-  }
-  return true
 }
 
 /**

@@ -194,3 +194,15 @@ function sameRows(a: { form: string; feats: string }[], b: { form: string; feats
   const sa = new Set(a.map(key))
   return b.every((r) => sa.has(key(r))) && new Set(b.map(key)).size === sa.size
 }
+
+/** Same cells in the same order with the same variants in the same order. */
+export function sameCells(a: readonly { key: string; forms: readonly string[] }[], b: typeof a): boolean {
+  if (a.length !== b.length) return false
+  for (let i = 0; i < a.length; i++) {
+    const x = a[i]!
+    const y = b[i]!
+    if (x.key !== y.key || x.forms.length !== y.forms.length) return false
+    for (let k = 0; k < x.forms.length; k++) if (x.forms[k] !== y.forms[k]) return false
+  }
+  return true
+}

@@ -1,7 +1,7 @@
 // The model: what learning a lexicon yields (paradigms, ranker, entries with their tables) plus the form index.
 import { DEFAULT_LEARN_OPTIONS, type InflectionModel, type LearnOptions } from '../inflect/learn.ts'
 import { applyParadigm } from '../inflect/paradigm.ts'
-import type { Cell } from '../lexicon/lexicon.ts'
+import { type Cell, sameCells } from '../lexicon/lexicon.ts'
 import type { FormIndex } from '../lookup/form-index.ts'
 
 /**
@@ -70,14 +70,5 @@ export function keptCells(inflection: Pick<InflectionModel, 'book'>, lemma: stri
   return p.cells.map((c, i) => ({ key: c.key, forms: forms[i] ?? [] }))
 }
 
-/** Same cells in the same order with the same variants in the same order. */
-export function sameCells(a: readonly { key: string; forms: readonly string[] }[], b: typeof a): boolean {
-  if (a.length !== b.length) return false
-  for (let i = 0; i < a.length; i++) {
-    const x = a[i]!
-    const y = b[i]!
-    if (x.key !== y.key || x.forms.length !== y.forms.length) return false
-    for (let k = 0; k < x.forms.length; k++) if (x.forms[k] !== y.forms[k]) return false
-  }
-  return true
-}
+/** Same cells in the same order with the same variants in the same order (lexicon.ts). */
+export { sameCells }
