@@ -2,9 +2,8 @@
 // (shards fetched) and unknown forms (the guesser's tables built), with the time each step took.
 // The model file comes from elsewhere, e.g. the whole German model of bench/scale-learn.ts --save FILE.
 // Run: node --expose-gc --max-old-space-size=16000 --import tsx bench/edge-memory.ts --model FILE [--budget BYTES]
-import { readFileSync } from 'node:fs'
 import { parseArgs } from 'node:util'
-import { gunzipSync } from 'node:zlib'
+import { readModelText } from '../src/cli/model-file.ts'
 import { decodeModel } from '../src/core/model/decode-model.ts'
 import { decodeShardedModel } from '../src/core/model/read-sharded.ts'
 import { shardModel } from '../src/core/model/shard-model.ts'
@@ -31,9 +30,7 @@ const heapMB = () => {
 }
 let files: Awaited<ReturnType<typeof shardModel>> | undefined
 {
-  const bytes = readFileSync(values.model)
-  const text = (bytes[0] === 0x1f && bytes[1] === 0x8b ? gunzipSync(bytes) : bytes).toString('utf8')
-  files = await shardModel(decodeModel(text), Number(values.budget))
+  files = await shardModel(decodeModel(await readModelText(values.model)), Number(values.budget))
 }
 const shards = files.shards
 await new Promise((done) => setTimeout(done, 10)) // weak references from sharding are cleared between jobs
