@@ -1,4 +1,4 @@
-// What a sharded model costs an isolate: heap of its head once decoded, then after answering indexed forms
+// What a sharded model costs an isolate: memory (JS heap and array buffers) of its head once decoded, then after answering indexed forms
 // (shards fetched) and unknown forms (the guesser's tables built), with the time each step took.
 // The model file comes from elsewhere, e.g. the whole German model of bench/scale-learn.ts --save FILE.
 // Run: node --expose-gc --max-old-space-size=16000 --import tsx bench/edge-memory.ts --model FILE [--budget BYTES]
@@ -23,10 +23,12 @@ if (!values.model || !gc) {
   process.stderr.write('usage: node --expose-gc --max-old-space-size=16000 --import tsx bench/edge-memory.ts --model FILE\n')
   process.exit(2)
 }
+// What an isolate pays for: the JS heap plus the typed arrays' buffers, which V8 keeps outside it.
 const heapMB = () => {
   gc()
   gc()
-  return process.memoryUsage().heapUsed / 1048576
+  const m = process.memoryUsage()
+  return (m.heapUsed + m.arrayBuffers) / 1048576
 }
 let files: Awaited<ReturnType<typeof shardModel>> | undefined
 {

@@ -1,21 +1,17 @@
 // Member suffixes per paradigm: how long a word-final string a lemma shares with the paradigm's members.
 
 /**
- * A reversed-letter trie of the member lemmas of one paradigm, with member counts per node, built once from
- * the whole list and never changed. Nodes are numbered breadth-first, so a node's children are consecutive
- * numbers, sorted by letter: four typed arrays hold the whole trie (16 bytes a node), where a map of edges
- * would hold a boxed number and an entry per edge. A dictionary-sized model keeps one per paradigm and per
- * cell rule, so this is most of what its candidate finders weigh.
+ * The member lemmas of one paradigm, reversed and sorted, built once from the whole list and never changed.
+ * The members sharing a word's last d letters are one run of that order, so following a word from its end
+ * narrows a range by binary search on the next letter. Two typed arrays hold it all (the letters end to end
+ * and where each member starts): about 2 bytes a letter, where a trie needs a node of 16 bytes per letter
+ * of each member's distinct ending. A dictionary-sized model keeps one per paradigm and per cell rule.
  */
 export class SuffixIndex {
-  /** Children of node n are nodes first[n] … first[n + 1] − 1. */
-  private readonly first: Int32Array
-  /** The letter (code point) on the edge into each node; the root's is −1. */
-  private readonly letter: Int32Array
-  /** Members whose reversed letters pass through each node. */
-  private readonly counts: Int32Array
-  /** Members that end at each node. */
-  private readonly ends: Int32Array
+  /** The reversed members' letters (code points, or UTF-16 units when all fit), in sorted order. */
+  private readonly text: Uint16Array | Int32Array
+  /** Member k is text[start[k]] … text[start[k + 1]] − 1. */
+  private readonly start: Int32Array
 
   /**
    * Index the given member lemmas (lowercased by the caller; a word listed twice counts twice).
@@ -24,51 +20,37 @@ export class SuffixIndex {
   constructor(words: Iterable<string> = []) {
     const reversed = [...words].map((w) => codePoints(w).reverse())
     reversed.sort(compareCodes)
-    // Breadth-first over ranges of the sorted words: a node is the range sharing its first `depth` letters.
-    const lo: number[] = [0]
-    const hi: number[] = [reversed.length]
-    const depth: number[] = [0]
-    const letter: number[] = [-1]
-    const first: number[] = []
-    const ends: number[] = []
-    for (let n = 0; n < lo.length; n++) {
-      const d = depth[n]!
-      let i = lo[n]!
-      const end = hi[n]!
-      // Words that end here sort first in their range (a prefix sorts before its extensions).
-      while (i < end && reversed[i]!.length === d) i++
-      ends.push(i - lo[n]!)
-      first.push(lo.length)
-      while (i < end) {
-        const c = reversed[i]![d]!
-        let j = i + 1
-        while (j < end && reversed[j]![d] === c) j++
-        lo.push(i)
-        hi.push(j)
-        depth.push(d + 1)
-        letter.push(c)
-        i = j
-      }
+    let letters = 0
+    let wide = false
+    for (const r of reversed) {
+      letters += r.length
+      for (const c of r) if (c > 0xffff) wide = true
     }
-    first.push(lo.length)
-    this.first = Int32Array.from(first)
-    this.letter = Int32Array.from(letter)
-    this.counts = Int32Array.from(lo, (l, n) => hi[n]! - l)
-    this.ends = Int32Array.from(ends)
+    this.text = wide ? new Int32Array(letters) : new Uint16Array(letters)
+    this.start = new Int32Array(reversed.length + 1)
+    let at = 0
+    reversed.forEach((r, k) => {
+      this.start[k] = at
+      this.text.set(r, at)
+      at += r.length
+    })
+    this.start[reversed.length] = at
   }
 
-  /** The child of `node` along letter `c`, or −1 (binary search among its sorted children). */
-  private child(node: number, c: number): number {
-    let a = this.first[node]!
-    let b = this.first[node + 1]! - 1
-    while (a <= b) {
-      const m = (a + b) >> 1
-      const x = this.letter[m]!
-      if (x === c) return m
-      if (x < c) a = m + 1
-      else b = m - 1
+  /** Letter d of member k, or −1 past its end (so a member that ends sorts before its extensions). */
+  private letterAt(k: number, d: number): number {
+    const i = this.start[k]! + d
+    return i < this.start[k + 1]! ? this.text[i]! : -1
+  }
+
+  /** The first member in [lo, hi) whose letter d is at least c (members there share letters 0 … d − 1). */
+  private lowerBound(lo: number, hi: number, d: number, c: number): number {
+    while (lo < hi) {
+      const m = (lo + hi) >> 1
+      if (this.letterAt(m, d) < c) lo = m + 1
+      else hi = m
     }
-    return -1
+    return lo
   }
 
   /**
@@ -94,24 +76,30 @@ export class SuffixIndex {
     exclude: boolean | readonly number[],
   ): { length: number; count: number; wholeMember: boolean } {
     const out = exclude === true ? chars : exclude === false ? null : exclude
-    let node = 0
+    let lo = 0
+    let hi = this.start.length - 1
     let length = 0
-    let count = this.counts[0]! - (out ? 1 : 0)
+    let count = hi - (out ? 1 : 0)
     let wholeMember = false
     // The excluded member shares the path while its letters from the end are the word's.
     let onPath = out !== null
     for (let i = chars.length - 1; i >= 0; i--) {
-      const next = this.child(node, chars[i]!)
-      if (next < 0) break
       const d = chars.length - 1 - i
-      onPath = onPath && d < out!.length && out![out!.length - 1 - d] === chars[i]
-      const c = this.counts[next]! - (onPath ? 1 : 0)
-      if (c <= 0) break
-      node = next
+      const c = chars[i]!
+      const a = this.lowerBound(lo, hi, d, c)
+      const b = this.lowerBound(a, hi, d, c + 1)
+      if (a === b) break
+      onPath = onPath && d < out!.length && out![out!.length - 1 - d] === c
+      const n = b - a - (onPath ? 1 : 0)
+      if (n <= 0) break
+      lo = a
+      hi = b
       length++
-      count = c
-      const endsHere = this.ends[node]! - (onPath && d === out!.length - 1 ? 1 : 0)
-      if (endsHere > 0 && i > 0) wholeMember = true
+      count = n
+      // Members that end here sort first in their run.
+      let ends = 0
+      while (a + ends < b && this.start[a + ends + 1]! - this.start[a + ends]! === d + 1) ends++
+      if (ends - (onPath && d === out!.length - 1 ? 1 : 0) > 0 && i > 0) wholeMember = true
     }
     return { length, count, wholeMember }
   }
