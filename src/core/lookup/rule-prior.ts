@@ -12,18 +12,33 @@ const BACKOFF = 2
 
 type RuleId = (upos: string, openPrefix: boolean, lemma: Pattern, cell: Pattern) => number | undefined
 
+/** Rule ids are packed with an ending's number into one map key while counting. */
+const RULE_SPAN = 2 ** 24
+
 /**
- * Counts, per form ending, of the rewrite that made each attested form from its lemma.
+ * Counts, per form ending, of the rewrite that made each attested form from its lemma. The endings form a
+ * trie read from a form's last letter; once counted it is frozen into typed arrays (children of a node are
+ * consecutive, sorted by letter; a node's counts are consecutive, sorted by rule), about a tenth of what a
+ * map of counts per ending holds.
  * @example new RulePrior(model, idOf).probabilities('Mänteln', [3, 9]) // [0.8, 0.05]
  */
 export class RulePrior {
-  private readonly counts = new Map<string, Map<number, number>>()
-  private readonly totals = new Map<string, number>()
+  /** Children of node n are nodes first[n] … first[n + 1] − 1; node 0 is the empty ending. */
+  private readonly first: Int32Array
+  /** The UTF-16 unit on the edge into each node (the letter the ending adds in front). */
+  private readonly unit: Uint16Array
+  /** Forms counted with each ending. */
+  private readonly totals: Int32Array
+  /** Node n's counts are pairRule/pairCount[pairAt[n]] … [pairAt[n + 1] − 1], by rule id. */
+  private readonly pairAt: Int32Array
+  private readonly pairRule: Int32Array
+  private readonly pairCount: Int32Array
   private readonly nRules: number
 
   constructor(model: Pick<InflectionModel, 'book' | 'lexicon'>, idOf: RuleId) {
     let maxId = 0
     const { entries } = model.lexicon
+    const growing = new GrowingTrie()
     for (let i = 0; i < entries.length; i++) {
       const e = entries[i]!
       const p = model.book.paradigms[model.book.memberOf[i] ?? -1]
@@ -38,25 +53,20 @@ export class RulePrior {
           const form = fillPattern(pattern, stems)
           const id = idOf(p.upos, p.openPrefix, p.lemma, pattern)
           if (id === undefined || !forms.includes(form)) continue
+          if (id >= RULE_SPAN) throw new Error(`more than ${RULE_SPAN} rewrites`)
           maxId = Math.max(maxId, id)
-          this.count(form, id)
+          growing.count(form, id)
         }
       }
     }
     this.nRules = maxId + 1
-  }
-
-  private count(form: string, id: number): void {
-    for (let k = 0; k <= Math.min(MAX_ENDING, form.length); k++) {
-      const end = `${k}:${form.slice(form.length - k)}`
-      let m = this.counts.get(end)
-      if (!m) {
-        m = new Map()
-        this.counts.set(end, m)
-      }
-      m.set(id, (m.get(id) ?? 0) + 1)
-      this.totals.set(end, (this.totals.get(end) ?? 0) + 1)
-    }
+    const frozen = growing.freeze()
+    this.first = frozen.first
+    this.unit = frozen.unit
+    this.totals = frozen.totals
+    this.pairAt = frozen.pairAt
+    this.pairRule = frozen.pairRule
+    this.pairCount = frozen.pairCount
   }
 
   /**
@@ -64,15 +74,106 @@ export class RulePrior {
    * ending's counts are smoothed towards the shorter ending's estimate.
    */
   probabilities(form: string, ids: readonly number[]): number[] {
+    // The endings of the form that were seen, shortest first.
+    const path: number[] = []
+    for (let k = 0, node = 0; k <= Math.min(MAX_ENDING, form.length); k++) {
+      if (k > 0) node = this.child(node, form.charCodeAt(form.length - k))
+      if (node < 0 || !this.totals[node]) break
+      path.push(node)
+    }
     return ids.map((id) => {
       let p = 1 / Math.max(1, this.nRules)
-      for (let k = 0; k <= Math.min(MAX_ENDING, form.length); k++) {
-        const end = `${k}:${form.slice(form.length - k)}`
-        const n = this.totals.get(end)
-        if (!n) break
-        p = ((this.counts.get(end)!.get(id) ?? 0) + BACKOFF * p) / (n + BACKOFF)
-      }
+      for (const node of path) p = (this.countOf(node, id) + BACKOFF * p) / (this.totals[node]! + BACKOFF)
       return p
     })
+  }
+
+  private child(node: number, u: number): number {
+    let a = this.first[node]!
+    let b = this.first[node + 1]! - 1
+    while (a <= b) {
+      const m = (a + b) >> 1
+      const x = this.unit[m]!
+      if (x === u) return m
+      if (x < u) a = m + 1
+      else b = m - 1
+    }
+    return -1
+  }
+
+  private countOf(node: number, id: number): number {
+    let a = this.pairAt[node]!
+    let b = this.pairAt[node + 1]! - 1
+    while (a <= b) {
+      const m = (a + b) >> 1
+      const x = this.pairRule[m]!
+      if (x === id) return this.pairCount[m]!
+      if (x < id) a = m + 1
+      else b = m - 1
+    }
+    return 0
+  }
+}
+
+/** The ending trie while counting: nodes by ending text, counts by (node, rule) in one map. */
+class GrowingTrie {
+  private readonly nodeOf = new Map<string, number>([['', 0]])
+  private readonly parent: number[] = [-1]
+  private readonly unitOf: number[] = [0]
+  private readonly totals: number[] = [0]
+  private readonly counts = new Map<number, number>()
+
+  count(form: string, id: number): void {
+    let node = 0
+    for (let k = 0; k <= Math.min(MAX_ENDING, form.length); k++) {
+      if (k > 0) {
+        const end = form.slice(form.length - k)
+        let next = this.nodeOf.get(end)
+        if (next === undefined) {
+          next = this.parent.length
+          this.nodeOf.set(end, next)
+          this.parent.push(node)
+          this.unitOf.push(end.charCodeAt(0))
+          this.totals.push(0)
+        }
+        node = next
+      }
+      this.totals[node]!++
+      const key = node * RULE_SPAN + id
+      this.counts.set(key, (this.counts.get(key) ?? 0) + 1)
+    }
+  }
+
+  /** Renumber breadth-first with children by letter, and lay the counts out per node by rule. */
+  freeze() {
+    const n = this.parent.length
+    const children: number[][] = Array.from({ length: n }, () => [])
+    for (let v = 1; v < n; v++) children[this.parent[v]!]!.push(v)
+    const order = [0]
+    const first = new Int32Array(n + 1)
+    for (let i = 0; i < order.length; i++) {
+      first[i] = order.length
+      const kids = children[order[i]!]!.sort((a, b) => this.unitOf[a]! - this.unitOf[b]!)
+      for (const c of kids) order.push(c)
+    }
+    first[n] = n
+    const renumber = new Int32Array(n)
+    order.forEach((v, i) => {
+      renumber[v] = i
+    })
+    const pairs: [number, number, number][] = []
+    for (const [key, c] of this.counts) pairs.push([renumber[Math.floor(key / RULE_SPAN)]!, key % RULE_SPAN, c])
+    pairs.sort((a, b) => a[0] - b[0] || a[1] - b[1])
+    const pairAt = new Int32Array(n + 1)
+    for (const [v] of pairs) pairAt[v + 1]!++
+    for (let v = 0; v < n; v++) pairAt[v + 1]! += pairAt[v]!
+    return {
+      first,
+      unit: Uint16Array.from(order, (v) => this.unitOf[v]!),
+      totals: Int32Array.from(order, (v) => this.totals[v]!),
+      pairAt,
+      pairRule: Int32Array.from(pairs, (x) => x[1]),
+      pairCount: Int32Array.from(pairs, (x) => x[2]),
+    }
   }
 }
