@@ -58,6 +58,7 @@ export interface HeadOptions {
    * Keep each attested table as its compact record and decode it whenever it is read (every record is still
    * decoded and checked once while reading): a sharded model's head at the edge, where decoded tables
    * would be most of an isolate's memory (about 190 MB for the whole German model) and few are ever read.
+   * A bare lemma's kept tables that carry cells of their own are kept so too.
    */
   lazyTables?: boolean
 }
@@ -80,7 +81,7 @@ export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelH
   const entries: LexEntry[] = []
   const memberOf: number[] = []
   const kept: (KeptTable[] | null)[] = []
-  const books = new Map<string, { paradigms: readonly Paradigm[]; cellKeys: readonly string[] }>()
+  const books = new Map<string, Book>()
   const bookOf = (upos: string) => {
     let b = books.get(upos)
     if (!b) books.set(upos, (b = { paradigms, cellKeys: cellsOf(upos) }))
@@ -95,7 +96,7 @@ export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelH
     if ('kept' in t) {
       entries.push({ lemma, upos, inherent, cells: null })
       memberOf.push(-1)
-      kept.push(t.kept)
+      kept.push(opts.lazyTables ? lazyKept(lemma, t.kept, table, bookOf(upos)) : t.kept)
     } else {
       entries.push(opts.lazyTables ? new LazyTableEntry(lemma, upos, inherent, table, bookOf(upos)) : { lemma, upos, inherent, cells: t.cells })
       memberOf.push(t.paradigm)
@@ -146,7 +147,7 @@ class LazyTableEntry implements LexEntry {
     readonly upos: string,
     readonly inherent: string,
     private readonly table: TableJson,
-    private readonly book: { paradigms: readonly Paradigm[]; cellKeys: readonly string[] },
+    private readonly book: Book,
   ) {}
 
   get cells(): Cell[] {
@@ -155,6 +156,51 @@ class LazyTableEntry implements LexEntry {
 
   toJSON(): LexEntry {
     return { lemma: this.lemma, upos: this.upos, inherent: this.inherent, cells: this.cells }
+  }
+}
+
+/** A UPOS's paradigms and cell keys, shared by the lazy tables of its entries. */
+interface Book {
+  paradigms: readonly Paradigm[]
+  cellKeys: readonly string[]
+}
+
+/** Kept tables with cells of their own (mixed from cell predictions) as lazy tables; the others as they are. */
+function lazyKept(lemma: string, tables: KeptTable[], json: TableJson, book: Book): KeptTable[] {
+  const records = json as [number, number, ...unknown[]][]
+  return tables.map((t, i) => (t.cells ? new LazyKeptTable(lemma, t, records[i]!, book) : t))
+}
+
+/**
+ * A kept table whose `cells` are decoded from its record on every read (the class shares the getter).
+ * Written out it is the plain kept table.
+ */
+class LazyKeptTable implements KeptTable {
+  readonly paradigm: number
+  readonly score: number
+  readonly completes?: true
+
+  constructor(
+    private readonly lemma: string,
+    t: KeptTable,
+    private readonly record: [number, number, ...unknown[]],
+    private readonly book: Book,
+  ) {
+    this.paradigm = t.paradigm
+    this.score = t.score
+    if (t.completes) this.completes = true
+  }
+
+  get cells(): Cell[] {
+    const one = [this.record] as TableJson
+    return (decodeTable(this.lemma, one, this.book.paradigms, this.book.cellKeys) as { kept: KeptTable[] }).kept[0]!
+      .cells!
+  }
+
+  toJSON(): KeptTable {
+    const out: KeptTable = { paradigm: this.paradigm, score: this.score, cells: this.cells }
+    if (this.completes) out.completes = true
+    return out
   }
 }
 

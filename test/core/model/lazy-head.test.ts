@@ -1,11 +1,12 @@
 // A sharded model's head keeps attested tables as their compact records and decodes them when read
-// (German handbook tables from memory, see test/core/lookup/fixtures): the same tables, the same
-// predictions, and a damaged record still refused while reading.
+// (German handbook tables from memory, see test/core/lookup/fixtures): the same tables and kept tables,
+// the same predictions, and a damaged record still refused while reading.
 import { describe, expect, it } from 'vitest'
 import { expandLemma } from '../../../src/core/inflect/expand.ts'
 import { FeatureIndex } from '../../../src/core/inflect/feature-index.ts'
 import { decodeModelHead } from '../../../src/core/model/decode-model.ts'
 import { encodeModel } from '../../../src/core/model/encode-model.ts'
+import { germanSampleModel } from '../../workers/german-sample.ts'
 import { germanModel } from '../lookup/fixtures/german.ts'
 
 describe('lazy tables in a model head', () => {
@@ -32,6 +33,22 @@ describe('lazy tables in a model head', () => {
     const at = json.entries.findIndex((e: unknown[]) => typeof e[3] === 'number')
     json.entries[at][3] = json.paradigms.length + 5 // a paradigm that does not exist
     expect(() => decodeModelHead(json, { lazyTables: true })).toThrow(/model file/)
+  })
+})
+
+describe('lazy kept tables in a model head', () => {
+  // Source: the npm German sample of the sharded-serving test (test/workers/german-sample.ts); a fifth of its
+  // lemmas are bare, and some of their kept tables are mixed from cell predictions (cells of their own).
+  const text = germanSampleModel()
+  const eager = decodeModelHead(JSON.parse(text))
+  const lazy = decodeModelHead(JSON.parse(text), { lazyTables: true })
+
+  it('reads every bare lemma\'s kept tables as the eager head does, and writes them out alike', () => {
+    const plain = (k: (typeof eager.kept)[number]) =>
+      k?.map((t) => ({ paradigm: t.paradigm, score: t.score, cells: t.cells, completes: t.completes ?? false }))
+    expect(eager.kept.filter((k) => k?.some((t) => t.cells)).length).toBeGreaterThan(3)
+    expect(lazy.kept.map(plain)).toEqual(eager.kept.map(plain))
+    expect(JSON.stringify(lazy.kept)).toBe(JSON.stringify(eager.kept))
   })
 })
 
