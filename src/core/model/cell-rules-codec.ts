@@ -3,7 +3,7 @@ import { decode, encode } from 'vlq'
 import type { Alternations, TwinOptions } from '../inflect/alternations.ts'
 import { CandidateFinder } from '../inflect/candidates.ts'
 import type { CellRuleModel } from '../inflect/cell-rules.ts'
-import { paradigmShapeKey } from '../inflect/paradigm.ts'
+import { type Paradigm, paradigmShapeKey } from '../inflect/paradigm.ts'
 import { extractPattern } from '../inflect/pattern.ts'
 import { tiedClasses, withTwins } from '../inflect/twins.ts'
 import type { LexEntry } from '../lexicon/lexicon.ts'
@@ -38,8 +38,11 @@ export function encodeAllCellRules(
 ): CellRulesJson[] {
   const firstWeights = new Map<string, number>()
   const firstMembers = new Map<string, number>()
+  // Cells that share a finder were learned as one (the same forms in every table): the same member lists.
+  const membersOf = new Map<CellRuleModel['finder'], string>()
   return cells.map((c, i) => {
-    const json = encodeCellRules(c, entries, cellsOf(c.upos), decimals, names)
+    const json = encodeCellRules(c, entries, cellsOf(c.upos), decimals, names, membersOf.get(c.finder))
+    membersOf.set(c.finder, json.members as string)
     const w = JSON.stringify(json.weights)
     const at = firstWeights.get(w)
     if (at === undefined) firstWeights.set(w, i)
@@ -92,7 +95,8 @@ const EMPTY: WeightsJson = { scale: 1, features: [], local: '', shared: {} }
 
 /**
  * Write one cell's rule ranker. A rule's members are the tables whose lemma → form rewrite in this cell
- * has the rule's shape; they are found again here and checked against the rule's member count.
+ * has the rule's shape; they are found again here and checked against the rule's member count, unless
+ * `members` gives them as written for a cell that shares this one's finder.
  * @example encodeCellRules(model.cells[0], entries, cellKeys, 4).rules.length // 12
  */
 export function encodeCellRules(
@@ -101,9 +105,22 @@ export function encodeCellRules(
   cellKeys: readonly string[],
   decimals: number,
   names?: ReadonlyMap<string, number>,
+  members?: string,
 ): CellRulesJson {
   // Twin rules are not written: reading derives them again from the rules (see twins.ts).
   const seen = m.rules.filter((r) => r.twinOf === undefined)
+  const at = cellKeys.indexOf(m.key)
+  return {
+    upos: m.upos,
+    cell: at >= 0 ? at : m.key,
+    rules: seen.map((r) => encodeParadigm(r, cellKeys)),
+    weights: encodeWeights(m.weights, decimals, names),
+    members: members ?? encodeMembers(m, seen, entries),
+  }
+}
+
+/** The member tables of each rule, as ascending entry numbers, delta-coded (checked against the counts). */
+function encodeMembers(m: CellRuleModel, seen: readonly Paradigm[], entries: readonly LexEntry[]): string {
   const shapeOf = new Map(seen.map((r, i) => [paradigmShapeKey(r.upos, r.lemma, r.openPrefix, r.cells), i]))
   const members: number[][] = seen.map(() => [])
   entries.forEach((e, i) => {
@@ -130,14 +147,7 @@ export function encodeCellRules(
       prev = i
     }
   }
-  const at = cellKeys.indexOf(m.key)
-  return {
-    upos: m.upos,
-    cell: at >= 0 ? at : m.key,
-    rules: seen.map((r) => encodeParadigm(r, cellKeys)),
-    weights: encodeWeights(m.weights, decimals, names),
-    members: encode(ints),
-  }
+  return encode(ints)
 }
 
 /**
