@@ -30,7 +30,7 @@ export function featureNames(all: readonly RankerWeights[]): string[] {
 }
 
 /** The feature names of one ranker's file form, looked up in the model's list when stored as positions. */
-function namesOf(json: WeightsJson, names: readonly string[] | undefined): string[] {
+function namesOf(json: Pick<WeightsJson, 'features'>, names: readonly string[] | undefined): string[] {
   if (Array.isArray(json.features)) return json.features
   if (!names) throw new Error('weights: feature positions without the model featureNames')
   let at = 0
@@ -131,19 +131,24 @@ export function encodeWeights(
  * @example decodeWeights(encodeWeights(w, 3)).local.get('s2:el\u00003') // 0.152
  */
 export function decodeWeights(json: WeightsJson, names?: readonly string[]): RankerWeights {
-  // The local weights are most of a model file: they are decoded when the ranker first needs them.
+  // The local weights are most of a model file: they are decoded when the ranker first needs them. Only
+  // their own fields are kept for that (the shared weights' record would otherwise stay alive beside them).
+  const file = { scale: json.scale, features: json.features, local: json.local }
   const local = new LazyMap<string, number>(function* () {
-    for (const [f, c, w] of localByFeature(json, names).entries()) yield [`${f}\u0000${c}`, w] as const
+    for (const [f, c, w] of localByFeature(file, names).entries()) yield [`${f}\u0000${c}`, w] as const
   })
   // Ranking reads weights feature by feature: that index is built straight from the file's layout.
-  provideFeatureIndex(local, () => localByFeature(json, names))
+  provideFeatureIndex(local, () => localByFeature(file, names))
   const shared = new Map<string, number>()
   for (const f of Object.keys(json.shared)) shared.set(f, json.shared[f]! / json.scale)
   return { local, shared }
 }
 
 /** The local weights of a file grouped by feature, in the file's order (its layout, decoded). */
-function localByFeature(json: WeightsJson, names?: readonly string[]): FeatureIndex {
+function localByFeature(
+  json: Pick<WeightsJson, 'scale' | 'features' | 'local'>,
+  names?: readonly string[],
+): FeatureIndex {
   const ints = decode(json.local)
   let at = 0
   return FeatureIndex.fromGroups(
