@@ -36,7 +36,7 @@ beforeAll(async () => {
   for (const name of (await readdir(dir)).filter((f) => f.endsWith('.json')).sort()) {
     committed.set(name, await readFile(dir + name, 'utf8'))
   }
-})
+}, 60_000) // choosing the stem cut learns twice on the demo tables: seconds on a loaded 2-core machine
 
 const book = (upos: string): BookParadigm[] =>
   JSON.parse(committed.get(`${upos}.json`) ?? '{"paradigms":[]}').paradigms
