@@ -3,10 +3,12 @@
 // in training and in prediction alike. Otherwise one compound teaches its modifier's start to every lemma
 // that shares it (Gitarrenbauer → Gitarre takes no plural ending).
 import type { LexEntry } from '../lexicon/lexicon.ts'
+import { SuffixIndex } from './suffix-index.ts'
 
 /** The lemmas of a lexicon's tables per UPOS, and the prefix features they make a compound drop. */
 export class ModifierFilter {
-  private readonly known = new Set<string>()
+  /** Per UPOS, its tables' lemmas (lowercased) as a suffix index. */
+  private readonly known = new Map<string, SuffixIndex>()
 
   /**
    * @param entries the training tables (entries without `cells` are ignored)
@@ -16,7 +18,14 @@ export class ModifierFilter {
     entries: Iterable<Pick<LexEntry, 'lemma' | 'upos' | 'cells'>>,
     readonly minHead: number,
   ) {
-    for (const e of entries) if (e.cells) this.known.add(`${e.upos}\u0000${e.lemma.toLowerCase()}`)
+    const lemmas = new Map<string, string[]>()
+    for (const e of entries) {
+      if (!e.cells) continue
+      const list = lemmas.get(e.upos)
+      if (list) list.push(e.lemma.toLowerCase())
+      else lemmas.set(e.upos, [e.lemma.toLowerCase()])
+    }
+    for (const [upos, list] of lemmas) this.known.set(upos, new SuffixIndex(list))
   }
 
   /**
@@ -24,10 +33,7 @@ export class ModifierFilter {
    * @example new ModifierFilter(entries, 3).hasHead('Gitarrenbauer', 'NOUN') // true when Bauer is known
    */
   hasHead(lemma: string, upos: string): boolean {
-    const w = lemma.toLowerCase()
-    for (let k = 1; k <= w.length - this.minHead; k++)
-      if (this.known.has(`${upos}\u0000${w.slice(k)}`)) return true
-    return false
+    return this.known.get(upos)?.endsWithMember(lemma.toLowerCase(), this.minHead) ?? false
   }
 
   /**

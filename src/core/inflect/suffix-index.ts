@@ -103,6 +103,31 @@ export class SuffixIndex {
     }
     return { length, count, wholeMember }
   }
+
+  /**
+   * Whether some member is a proper suffix of `word` (the word's last letters, not all of it) at least
+   * `minUnits` UTF-16 units long.
+   * @example new SuffixIndex(['bauer']).endsWithMember('gitarrenbauer', 3) // true
+   */
+  endsWithMember(word: string, minUnits: number): boolean {
+    const chars = codePoints(word)
+    let lo = 0
+    let hi = this.start.length - 1
+    let units = 0
+    for (let i = chars.length - 1; i > 0; i--) {
+      const d = chars.length - 1 - i
+      const c = chars[i]!
+      const a = this.lowerBound(lo, hi, d, c)
+      const b = this.lowerBound(a, hi, d, c + 1)
+      if (a === b) return false
+      lo = a
+      hi = b
+      units += c > 0xffff ? 2 : 1
+      // Members that end here sort first in their run.
+      if (units >= minUnits && this.start[a + 1]! - this.start[a]! === d + 1) return true
+    }
+    return false
+  }
 }
 
 /** Code-point sequences in lexicographic order (a prefix first). */

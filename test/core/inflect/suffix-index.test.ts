@@ -53,4 +53,16 @@ describe('SuffixIndex', () => {
       { numRuns: 300 },
     )
   })
+
+  it('finds a member as a proper ending of at least so many units as a scan of the word\'s endings does', () => {
+    fc.assert(
+      fc.property(words, fc.string({ unit: letter, maxLength: 8 }), fc.integer({ min: 1, max: 4 }), (members, word, min) => {
+        const known = new Set(members)
+        let scan = false
+        for (let k = 1; k <= word.length - min; k++) if (known.has(word.slice(k))) scan = true
+        expect(new SuffixIndex(members).endsWithMember(word, min)).toBe(scan)
+      }),
+      { numRuns: 500 },
+    )
+  })
 })
