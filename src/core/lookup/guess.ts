@@ -85,12 +85,11 @@ export function guessForm(
   const ctx = lookupContext(model)
   const hyps = keys.flatMap((k) =>
     ctx.reverse.hypotheses(k.key).map((h) => {
-      const key = entryKey(h.lemma, h.upos)
       const cap = ctx.capitalShare.get(h.upos) ?? 0.5
-      const prior =
-        h.prior * (ctx.listed.has(key) ? opts.listedBoost : 1) * (isCapitalized(h.lemma) ? cap : 1 - cap)
-      const listed = ctx.listed.has(key)
-      return { ...h, form: k.key, how: k.how, inherent: ctx.listed.get(key) ?? '_', listed, prior, weight: 0 }
+      const inherent = ctx.listed.get(h.lemma, h.upos)
+      const listed = inherent !== undefined
+      const prior = h.prior * (listed ? opts.listedBoost : 1) * (isCapitalized(h.lemma) ? cap : 1 - cap)
+      return { ...h, form: k.key, how: k.how, inherent: inherent ?? '_', listed, prior, weight: 0 }
     }),
   )
   hyps.sort(
@@ -130,7 +129,7 @@ export function guessForm(
   for (const { w, marginal, inTable } of cells) {
     if (inTable <= 0 || (opts.mass < 1 && mass >= opts.mass)) break
     mass += w.weight / z
-    const has = ctx.attested.get(entryKey(w.lemma, w.upos))
+    const has = ctx.attested.get(w.lemma, w.upos)
     for (const [cell, m] of marginal) {
       if (has?.has(cell)) continue
       // Four significant digits: tidy answers that still rank improbable guesses apart.

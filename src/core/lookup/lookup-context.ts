@@ -1,7 +1,6 @@
 // What analysis needs besides the index, derived once per model: reversed rules, dictionary facts, caches.
 import type { InflectionModel } from '../inflect/learn.ts'
 import type { PredictedTable } from '../inflect/predict.ts'
-import { entryKey } from '../lexicon/entry.ts'
 import type { FormIndex } from './form-index.ts'
 import { ReverseRules } from './reverse-rules.ts'
 
@@ -27,13 +26,35 @@ export class BoundedCache<V> {
   }
 }
 
+/**
+ * Values by (lemma, UPOS), a map of lemmas per UPOS: the keys are the entries' own lemma strings, where
+ * one map keyed by "lemma\tUPOS" would make a string per entry.
+ */
+export class ByEntry<V> {
+  private readonly byUpos = new Map<string, Map<string, V>>()
+
+  get(lemma: string, upos: string): V | undefined {
+    return this.byUpos.get(upos)?.get(lemma)
+  }
+
+  has(lemma: string, upos: string): boolean {
+    return this.byUpos.get(upos)?.has(lemma) ?? false
+  }
+
+  set(lemma: string, upos: string, value: V): void {
+    let m = this.byUpos.get(upos)
+    if (!m) this.byUpos.set(upos, (m = new Map()))
+    m.set(lemma, value)
+  }
+}
+
 /** Dictionary facts and caches for one model. */
 export interface LookupContext {
   reverse: ReverseRules
-  /** (lemma, upos) of each bare lemma the dictionary lists → its inherent features. */
-  listed: Map<string, string>
-  /** (lemma, upos) of each entry with a table → the cells it has (entries alike share one set: read only). */
-  attested: Map<string, ReadonlySet<string>>
+  /** Each bare lemma the dictionary lists → its inherent features. */
+  listed: ByEntry<string>
+  /** Each entry with a table → the cells it has (entries alike share one set: read only). */
+  attested: ByEntry<ReadonlySet<string>>
   /** Per UPOS: the share of its lemmas that start with a capital (smoothed). */
   capitalShare: Map<string, number>
   tables: BoundedCache<PredictedTable[]>
@@ -44,18 +65,17 @@ const CACHE_LIMIT = 4096
 
 /**
  * The lookup context of a model, built on first use.
- * @example lookupContext(model).listed.has('Mantel\tNOUN') // true for a bare lemma of the dictionary
+ * @example lookupContext(model).listed.has('Mantel', 'NOUN') // true for a bare lemma of the dictionary
  */
 export function lookupContext(model: LookupModel): LookupContext {
   let ctx = contexts.get(model.inflection)
   if (ctx) return ctx
-  const listed = new Map<string, string>()
-  const attested = new Map<string, Set<string>>()
+  const listed = new ByEntry<string>()
+  const attested = new ByEntry<ReadonlySet<string>>()
   const caps = new Map<string, [number, number]>()
   // Tables of one UPOS mostly have the same cells: entries with the same cells share one (never changed) set.
   const cellSets = new Map<string, Set<string>>()
   for (const e of model.inflection.lexicon.entries) {
-    const key = entryKey(e.lemma, e.upos)
     const cells = e.cells
     if (cells) {
       const keys = cells.map((c) => c.key)
@@ -65,8 +85,8 @@ export function lookupContext(model: LookupModel): LookupContext {
         set = new Set(keys)
         cellSets.set(id, set)
       }
-      attested.set(key, set)
-    } else listed.set(key, e.inherent)
+      attested.set(e.lemma, e.upos, set)
+    } else listed.set(e.lemma, e.upos, e.inherent)
     const c = caps.get(e.upos) ?? [0, 0]
     if (isCapitalized(e.lemma)) c[0]++
     c[1]++
