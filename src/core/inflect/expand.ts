@@ -1,6 +1,6 @@
 // Expansion: the full table of a lemma — attested from the dictionary, or predicted with a score per cell.
 import { mergeFeats } from '../lexicon/feats.ts'
-import { entryKey } from '../lexicon/entry.ts'
+import { ByEntry } from '../lexicon/entry.ts'
 import { corpusCount } from './corpus-evidence.ts'
 import type { InflectionModel } from './learn.ts'
 import { type PredictedTable, predictLemma } from './predict.ts'
@@ -39,12 +39,13 @@ export interface ExpandOptions {
 }
 
 /** Index from (lemma, upos) to lexicon entry position, built once per model. */
-const entryIndexCache = new WeakMap<InflectionModel, Map<string, number>>()
+const entryIndexCache = new WeakMap<InflectionModel, ByEntry<number>>()
 
-function entryIndex(model: InflectionModel): Map<string, number> {
+function entryIndex(model: InflectionModel): ByEntry<number> {
   let idx = entryIndexCache.get(model)
   if (!idx) {
-    idx = new Map(model.lexicon.entries.map((e, i) => [entryKey(e.lemma, e.upos), i]))
+    idx = new ByEntry<number>()
+    model.lexicon.entries.forEach((e, i) => idx!.set(e.lemma, e.upos, i))
     entryIndexCache.set(model, idx)
   }
   return idx
@@ -63,7 +64,7 @@ export function expandLemma(
   inherent?: string,
   opts: ExpandOptions = {},
 ): ExpandedTable | null {
-  const at = entryIndex(model).get(entryKey(lemma, upos))
+  const at = entryIndex(model).get(lemma, upos)
   const entry = at === undefined ? undefined : model.lexicon.entries[at]
   const inh = inherent && inherent !== '_' ? inherent : (entry?.inherent ?? '_')
   if (entry?.cells) {

@@ -1,4 +1,4 @@
-// Dictionary entries: what readers produce (lemma, UPOS, inherent FEATS, optional table of forms).
+// Dictionary entries: what readers produce (lemma, UPOS, inherent FEATS, optional table of forms), and their identity.
 
 /** One form of a table with the full FEATS bundle of its cell (canonical). */
 export interface FormRow {
@@ -34,6 +34,29 @@ export interface TableRow {
 /** Identity of a lexicon entry: the same lemma string under two UPOS tags is two entries. */
 export function entryKey(lemma: string, upos: string): string {
   return `${lemma}\t${upos}`
+}
+
+/**
+ * Values by (lemma, UPOS), a map of lemmas per UPOS: the keys are the entries' own lemma strings, where
+ * one map keyed by "lemma\tUPOS" would make a string per entry.
+ * @example const m = new ByEntry<number>(); m.set('Mantel', 'NOUN', 7); m.get('Mantel', 'NOUN') // 7
+ */
+export class ByEntry<V> {
+  private readonly byUpos = new Map<string, Map<string, V>>()
+
+  get(lemma: string, upos: string): V | undefined {
+    return this.byUpos.get(upos)?.get(lemma)
+  }
+
+  has(lemma: string, upos: string): boolean {
+    return this.byUpos.get(upos)?.has(lemma) ?? false
+  }
+
+  set(lemma: string, upos: string, value: V): void {
+    let m = this.byUpos.get(upos)
+    if (!m) this.byUpos.set(upos, (m = new Map()))
+    m.set(lemma, value)
+  }
 }
 
 /**

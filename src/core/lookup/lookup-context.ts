@@ -3,6 +3,7 @@ import type { InflectionModel } from '../inflect/learn.ts'
 import type { PredictedTable } from '../inflect/predict.ts'
 import type { FormIndex } from './form-index.ts'
 import { ReverseRules } from './reverse-rules.ts'
+import { ByEntry } from '../lexicon/entry.ts'
 
 /** What analysis reads: the inflection model (paradigms, rankers, lexicon) and the form index. */
 export interface LookupModel {
@@ -23,28 +24,6 @@ export class BoundedCache<V> {
     if (this.map.size >= this.limit) this.map.delete(this.map.keys().next().value!)
     this.map.set(key, value)
     return value
-  }
-}
-
-/**
- * Values by (lemma, UPOS), a map of lemmas per UPOS: the keys are the entries' own lemma strings, where
- * one map keyed by "lemma\tUPOS" would make a string per entry.
- */
-export class ByEntry<V> {
-  private readonly byUpos = new Map<string, Map<string, V>>()
-
-  get(lemma: string, upos: string): V | undefined {
-    return this.byUpos.get(upos)?.get(lemma)
-  }
-
-  has(lemma: string, upos: string): boolean {
-    return this.byUpos.get(upos)?.has(lemma) ?? false
-  }
-
-  set(lemma: string, upos: string, value: V): void {
-    let m = this.byUpos.get(upos)
-    if (!m) this.byUpos.set(upos, (m = new Map()))
-    m.set(lemma, value)
   }
 }
 
