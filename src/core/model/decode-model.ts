@@ -13,7 +13,7 @@ import { checkModelJson, smokeTestModel } from './check-model.ts'
 import { decodeCorpus } from './corpus-codec.ts'
 import { MODEL_FORMAT, MODEL_VERSION, type ModelJson } from './encode-model.ts'
 import type { KeptTable, Model } from './model.ts'
-import { decodeParadigm } from './paradigm-codec.ts'
+import { decodeParadigm, shareCellForms } from './paradigm-codec.ts'
 import { decodeTable, type TableJson } from './table-codec.ts'
 import { decodeWeights } from './weights-codec.ts'
 
@@ -78,6 +78,7 @@ export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelH
   const alternations = learnAlternations(learned, twinOpts)
   const twins = twinParadigms(learned, alternations)
   const paradigms = [...learned, ...twins]
+  shareCellForms(paradigms)
   const entries: LexEntry[] = []
   const memberOf: number[] = []
   const kept: (KeptTable[] | null)[] = []
@@ -120,6 +121,7 @@ export function decodeModelHead(json: ModelJson, opts: HeadOptions = {}): ModelH
     cells: decodeAllCellRules(json.cellRules ?? [], entries, cellsOf, alternations, twinOpts, json.featureNames),
     options: json.options.learn,
   }
+  shareCellForms(inflection.cells.flatMap((c) => c.rules))
   // The edit factor is learned again from the stored tables, as learning made it (nothing of it is stored).
   if (json.options.learn.edits) {
     inflection.edits = learnEditFactors(entries, paradigms, memberOf, json.options.learn.ranker)

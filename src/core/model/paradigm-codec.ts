@@ -1,6 +1,6 @@
 // Paradigms in the model file: cells by their index in the UPOS's cell list, stem shapes as tuples.
 import type { Paradigm } from '../inflect/paradigm.ts'
-import type { Pattern } from '../inflect/pattern.ts'
+import { type Pattern, patternKey } from '../inflect/pattern.ts'
 import { ProblemError } from '../lexicon/problem.ts'
 
 /** A paradigm (or a cell rule) in the file: cells as `[cell, pattern…]`, shapes as `[seen, first, last, min, max]`. */
@@ -64,5 +64,31 @@ export function decodeParadigm(p: ParadigmJson, cellKeys: readonly string[]): Pa
       minLength,
       maxLength,
     })),
+  }
+}
+
+/**
+ * Let cells with the same forms share one frozen list of them, and equal patterns one frozen pattern: a
+ * dictionary-sized book read from a file has tens of thousands of cells but far fewer distinct rewrites
+ * (the whole German model: 62,000 cells, 16 MB before, about a third after). Read paradigms are never
+ * changed; freezing makes any attempt throw.
+ * @example shareCellForms(book.paradigms); book.paradigms[0].cells[0].forms === book.paradigms[1].cells[0].forms // when alike
+ */
+export function shareCellForms(paradigms: Iterable<Paradigm>): void {
+  const patterns = new Map<string, Pattern>()
+  const lists = new Map<string, Pattern[]>()
+  const shared = (f: Pattern, key: string) => {
+    let q = patterns.get(key)
+    if (!q) patterns.set(key, (q = Object.freeze([...f]) as Pattern))
+    return q
+  }
+  for (const p of paradigms) {
+    for (const c of p.cells) {
+      const keys = c.forms.map(patternKey)
+      const id = keys.join('\u0003')
+      let list = lists.get(id)
+      if (!list) lists.set(id, (list = Object.freeze(c.forms.map((f, i) => shared(f, keys[i]!))) as Pattern[]))
+      c.forms = list
+    }
   }
 }
