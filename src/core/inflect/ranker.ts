@@ -105,7 +105,7 @@ export function scoreCandidates(
   const at = positionsByClass(cls)
   const { start, cls: classOfWeight, weight } = byFeature
   for (const f of local) {
-    const slot = byFeature.slot.get(f)
+    const slot = byFeature.slotOf(f)
     if (slot === undefined) continue
     const from = start[slot]!
     const to = start[slot + 1]!

@@ -2,7 +2,7 @@
 // Base64 VLQ is the integer encoding of Source Map Revision 3 (signed, 5 bits per character); `vlq` implements it.
 import { decode, encode } from 'vlq'
 import type { InflectionModel } from '../inflect/learn.ts'
-import { FeatureIndex } from '../inflect/feature-index.ts'
+import { FeatureIndex, type NameTable } from '../inflect/feature-index.ts'
 import { provideFeatureIndex, type RankerWeights } from '../inflect/ranker.ts'
 import { LazyMap } from './lazy-map.ts'
 
@@ -151,20 +151,40 @@ function localByFeature(
 ): FeatureIndex {
   const ints = decode(json.local)
   let at = 0
-  return FeatureIndex.fromGroups(
-    (function* () {
-      for (const f of namesOf(json, names)) {
-        const n = ints[at++]!
-        const classes: [number, number][] = []
-        let c = 0
-        for (let k = 0; k < n; k++) {
-          c += ints[at++]!
-          classes.push([c, ints[at++]! / json.scale])
-        }
-        yield [f, classes] as const
-      }
-    })(),
-  )
+  const classesOf = () => {
+    const n = ints[at++]!
+    const classes: [number, number][] = []
+    let c = 0
+    for (let k = 0; k < n; k++) {
+      c += ints[at++]!
+      classes.push([c, ints[at++]! / json.scale])
+    }
+    return classes
+  }
+  if (typeof json.features === 'string' && names) {
+    // Positions in the model's names: the ranker finds its slots through the model's one name table.
+    const table = nameTableOf(names)
+    let p = 0
+    const groups = decode(json.features).map((d) => {
+      p += d
+      if (names[p] === undefined) throw new Error(`weights: no feature name ${p}`)
+      return [p, classesOf()] as const
+    })
+    return FeatureIndex.fromTableGroups(table, groups)
+  }
+  return FeatureIndex.fromGroups(namesOf(json, names).map((f) => [f, classesOf()] as const))
+}
+
+const nameTables = new WeakMap<readonly string[], NameTable>()
+
+/** The name table of a model's feature names, made once per list. */
+function nameTableOf(names: readonly string[]): NameTable {
+  let t = nameTables.get(names)
+  if (!t) {
+    t = { names, position: new Map(names.map((f, i) => [f, i])) }
+    nameTables.set(names, t)
+  }
+  return t
 }
 
 function byCodeUnit(a: string, b: string): number {

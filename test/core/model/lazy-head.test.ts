@@ -58,9 +58,38 @@ describe('FeatureIndex', () => {
       ['s1:e', [[7, 0.5], [2, -1], [40, 3]]],
       ['p1:g', [[2, 0.25]]],
     ])
-    const s = index.slot.get('s1:e')!
+    const s = index.slotOf('s1:e')!
     expect([2, 7, 40, 3].map((c) => index.weightOf(s, c))).toEqual([-1, 0.5, 3, undefined])
-    expect(index.weightOf(index.slot.get('p1:g')!, 2)).toBe(0.25)
+    expect(index.weightOf(index.slotOf('p1:g')!, 2)).toBe(0.25)
     expect([...index.entries()]).toEqual([['s1:e', 2, -1], ['s1:e', 7, 0.5], ['s1:e', 40, 3], ['p1:g', 2, 0.25]])
+  })
+})
+
+describe('FeatureIndex through a name table', () => {
+  const names = ['b', 'p1:g', 's1:e', 's2:el']
+  const table = { names, position: new Map(names.map((f, i) => [f, i])) }
+  const groups: [number, [number, number][]][] = [
+    [1, [[2, 0.25]]],
+    [2, [[7, 0.5], [2, -1]]],
+    [3, [[1, 2]]],
+  ]
+
+  it('answers as the index with a map of its own does, and lists the same entries', () => {
+    const viaTable = FeatureIndex.fromTableGroups(table, groups)
+    const viaMap = FeatureIndex.fromGroups(groups.map(([p, pairs]) => [names[p]!, pairs] as const))
+    for (const f of [...names, 'unknown'])
+      for (const c of [1, 2, 7, 9]) {
+        const a = viaTable.slotOf(f)
+        const b = viaMap.slotOf(f)
+        expect(a === undefined ? undefined : viaTable.weightOf(a, c)).toBe(b === undefined ? undefined : viaMap.weightOf(b, c))
+      }
+    expect(viaTable.slotOf('b')).toBeUndefined()
+    expect([...viaTable.entries()]).toEqual([...viaMap.entries()])
+  })
+
+  it('falls back to a map of its own when positions are not ascending', () => {
+    const odd = FeatureIndex.fromTableGroups(table, [groups[2]!, groups[0]!])
+    expect(odd.weightOf(odd.slotOf('s2:el')!, 1)).toBe(2)
+    expect(odd.weightOf(odd.slotOf('p1:g')!, 2)).toBe(0.25)
   })
 })
