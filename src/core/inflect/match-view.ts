@@ -132,15 +132,33 @@ function step(s: typeof search, part: number, pos: number): void {
       if (word.startsWith(p, pos)) step(s, part + 1, pos + p.length)
     } else {
       const min = p === 0 && view.openPrefix ? 0 : 1
-      // A variable followed by a literal can only end where that literal starts.
       const next = lemma[part + 1]
-      for (let end = n; end >= pos + min; end--) {
-        if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
-        if (typeof next === 'string' && !word.startsWith(next, end)) continue
-        if (next === undefined && end !== n) continue
-        s.from[p] = pos
-        s.to[p] = end
-        step(s, part + 1, end)
+      if (typeof next === 'string') {
+        // A variable followed by a literal can only end where that literal starts: its places, last first.
+        let end = word.lastIndexOf(next, n)
+        while (end >= pos + min) {
+          if (!(end < n && isHighSurrogate(word.charCodeAt(end - 1)))) {
+            s.from[p] = pos
+            s.to[p] = end
+            step(s, part + 1, end)
+          }
+          if (end === 0) break
+          end = word.lastIndexOf(next, end - 1)
+        }
+      } else if (next === undefined) {
+        // The last part: the variable takes the rest.
+        if (n >= pos + min) {
+          s.from[p] = pos
+          s.to[p] = n
+          step(s, part + 1, n)
+        }
+      } else {
+        for (let end = n; end >= pos + min; end--) {
+          if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
+          s.from[p] = pos
+          s.to[p] = end
+          step(s, part + 1, end)
+        }
       }
     }
   }
