@@ -1,7 +1,7 @@
 // A paradigm as candidate search reads it: its lemma pattern, stem shapes and sizes in one record of one
 // shape (paradigms and cell rules are objects of several shapes), and the best stem split without cutting
 // out the others.
-import { isHighSurrogate, MAX_MATCHES, matchSingle, type Paradigm, type StemShape } from './paradigm.ts'
+import { isHighSurrogate, MAX_MATCHES, type Paradigm, type StemShape } from './paradigm.ts'
 import type { Pattern } from './pattern.ts'
 
 /** A stem shape as StemShape. */
@@ -23,6 +23,8 @@ export interface MatchView {
   members: number
   /** The paradigm it mirrors (twins.ts), or -1. */
   twinOf: number
+  /** When the lemma pattern is one stem between two literals (either may be ''), they: matchSingle's case. */
+  single: { before: string; after: string } | null
 }
 
 /**
@@ -38,6 +40,22 @@ export function matchView(p: Paradigm): MatchView {
     shapes: p.shapes ? p.shapes.map(shapeView) : null,
     members: p.members,
     twinOf: p.twinOf ?? -1,
+    single: singleStem(p.lemma),
+  }
+}
+
+/** The literals around the only stem of a lemma pattern, where matchSingle (paradigm.ts) decides alone. */
+function singleStem(lemma: Pattern): { before: string; after: string } | null {
+  let at = -1
+  for (let i = 0; i < lemma.length; i++) {
+    if (typeof lemma[i] !== 'number') continue
+    if (at >= 0) return null
+    at = i
+  }
+  if (at < 0 || lemma[at] !== 0 || lemma.length > at + 2 || at > 1) return null
+  return {
+    before: at === 1 ? (lemma[0] as string) : '',
+    after: at + 1 < lemma.length ? (lemma[at + 1] as string) : '',
   }
 }
 
@@ -72,8 +90,16 @@ export function viewFit(stems: readonly string[], v: MatchView): number {
  * @example viewStems(matchView(p), 'Mantel') // ['Mant', 'l']
  */
 export function viewStems(v: MatchView, lemma: string): string[] | null {
-  const single = matchSingle(v.lemma, v.openPrefix, lemma)
-  if (single !== undefined) return single[0] ?? null
+  lastFit = -1
+  if (v.single) {
+    // As matchSingle: the one stem is what the literals leave.
+    const { before, after } = v.single
+    const end = lemma.length - after.length
+    if (end < before.length + (v.openPrefix ? 0 : 1) || !lemma.startsWith(before) || !lemma.endsWith(after))
+      return null
+    if (end < lemma.length && isHighSurrogate(lemma.charCodeAt(end - 1))) return null
+    return [lemma.slice(before.length, end)]
+  }
   const s = search
   s.view = v
   s.word = lemma
@@ -96,9 +122,21 @@ export function viewStems(v: MatchView, lemma: string): string[] | null {
   step(s, 0, 0)
   s.word = ''
   if (s.found === 0) return null
+  lastFit = s.bestFit
   const stems: string[] = []
   for (let i = 0; i < s.vars; i++) stems.push(lemma.slice(s.bestFrom[i]!, s.bestTo[i]!))
   return stems
+}
+
+/** The viewFit of the stems the last viewStems call returned when its search scored them already, else -1. */
+let lastFit = -1
+
+/**
+ * viewFit of the stems viewStems has just returned for this view (the search knows it when it had to choose).
+ * @example const stems = viewStems(v, 'Mantel'); stems && fitOfMatch(stems, v) // 4
+ */
+export function fitOfMatch(stems: readonly string[], v: MatchView): number {
+  return lastFit >= 0 ? lastFit : viewFit(stems, v)
 }
 
 /** The state of one viewStems search, reused (matching is synchronous); `dead` as in paradigm.ts. */
