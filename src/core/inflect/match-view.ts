@@ -6,7 +6,8 @@ import type { Pattern } from './pattern.ts'
 
 /** A stem shape as StemShape. */
 interface ShapeView {
-  seen: readonly string[]
+  /** The seen contents by length (most are not the length asked for: they need no comparing). */
+  seenByLength: readonly (readonly string[] | undefined)[]
   first: string
   last: string
   minLength: number
@@ -60,7 +61,9 @@ function singleStem(lemma: Pattern): { before: string; after: string } | null {
 }
 
 function shapeView(s: StemShape): ShapeView {
-  return { seen: s.seen, first: s.first, last: s.last, minLength: s.minLength, maxLength: s.maxLength }
+  const seenByLength: string[][] = []
+  for (const x of s.seen) (seenByLength[x.length] ??= []).push(x)
+  return { seenByLength, first: s.first, last: s.last, minLength: s.minLength, maxLength: s.maxLength }
 }
 
 /**
@@ -75,7 +78,7 @@ export function viewFit(stems: readonly string[], v: MatchView): number {
     const s = stems[i]!
     const sh = shapes[i]
     if (!sh) continue
-    if (s.length >= 2 && sh.seen.includes(s)) fit += 3
+    if (s.length >= 2 && sh.seenByLength[s.length]?.includes(s)) fit += 3
     if (s.length >= sh.minLength && s.length <= sh.maxLength) fit += 1
     if (s && sh.first.includes(s[0]!)) fit += 1
     if (s && sh.last.includes(s[s.length - 1]!)) fit += 1
@@ -215,7 +218,7 @@ function found(s: typeof search): void {
       const a = s.from[i]!
       const b = s.to[i]!
       const len = b - a
-      if (len >= 2 && seenAt(sh.seen, word, a, len)) fit += 3
+      if (len >= 2 && seenAt(sh.seenByLength[len], word, a)) fit += 3
       if (len >= sh.minLength && len <= sh.maxLength) fit += 1
       if (len > 0 && sh.first.includes(word[a]!)) fit += 1
       if (len > 0 && sh.last.includes(word[b - 1]!)) fit += 1
@@ -231,8 +234,8 @@ function found(s: typeof search): void {
   s.found++
 }
 
-/** Whether some seen content is the `len` code units of `word` from `at` (no substring made). */
-function seenAt(seen: readonly string[], word: string, at: number, len: number): boolean {
-  for (const x of seen) if (x.length === len && word.startsWith(x, at)) return true
+/** Whether some seen content (of one length) is what `word` has from `at` (no substring made). */
+function seenAt(seen: readonly string[] | undefined, word: string, at: number): boolean {
+  if (seen) for (const x of seen) if (word.startsWith(x, at)) return true
   return false
 }
