@@ -74,7 +74,10 @@ export class CandidateFinder {
       this.byEnding.set(p.upos, groups)
     })
     for (const [upos, groups] of this.byEnding)
-      this.endingLengths.set(upos, [...new Set([...groups.keys()].map((e) => e.length))].sort((a, b) => a - b))
+      this.endingLengths.set(
+        upos,
+        [...new Set([...groups.keys()].map((e) => e.length))].sort((a, b) => a - b),
+      )
     this.leftEdits = paradigms.map(leftEdits)
     const leftIds = new Map<string, number>()
     this.leftId = this.leftEdits.map((left) => {

@@ -62,7 +62,11 @@ function singleStem(lemma: Pattern): { before: string; after: string } | null {
 
 function shapeView(s: StemShape): ShapeView {
   const seenByLength: string[][] = []
-  for (const x of s.seen) (seenByLength[x.length] ??= []).push(x)
+  for (const x of s.seen) {
+    const list = seenByLength[x.length]
+    if (list) list.push(x)
+    else seenByLength[x.length] = [x]
+  }
   return { seenByLength, first: s.first, last: s.last, minLength: s.minLength, maxLength: s.maxLength }
 }
 
