@@ -2,7 +2,7 @@
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { featureNames as names } from './feature-names.ts'
 import { harmonyClass, harmonyLetters, literalLetters } from './harmony.ts'
-import { type MatchView, matchView, viewFit, viewStems } from './match-view.ts'
+import { fitOfMatch, type MatchView, matchView, viewStems } from './match-view.ts'
 import type { Paradigm } from './paradigm.ts'
 import { codePoints, SuffixIndex } from './suffix-index.ts'
 import { letterSides, paradigmSide, tiedClasses } from './twins.ts'
@@ -35,6 +35,8 @@ export class CandidateFinder {
   private readonly byUpos = new Map<string, number[]>()
   /** Per UPOS, paradigms by the literal their lemma pattern ends with ('' when it ends with a stem). */
   private readonly byEnding = new Map<string, Map<string, number[]>>()
+  /** Per UPOS, the distinct lengths of those literals, ascending. */
+  private readonly endingLengths = new Map<string, number[]>()
   private readonly suffixes: SuffixIndex[]
   /** Per paradigm: what its cells put before the stem, as one signature shared by paradigms alike there. */
   private readonly leftEdits: string[]
@@ -71,6 +73,11 @@ export class CandidateFinder {
       groups.set(ending, [...(groups.get(ending) ?? []), i])
       this.byEnding.set(p.upos, groups)
     })
+    for (const [upos, groups] of this.byEnding)
+      this.endingLengths.set(
+        upos,
+        [...new Set([...groups.keys()].map((e) => e.length))].sort((a, b) => a - b),
+      )
     this.leftEdits = paradigms.map(leftEdits)
     const leftIds = new Map<string, number>()
     this.leftId = this.leftEdits.map((left) => {
@@ -167,10 +174,11 @@ export class CandidateFinder {
       if (!lemma.startsWith(v.first)) continue
       const stems = viewStems(v, lemma)
       if (!stems) continue
+      const fit = fitOfMatch(stems, v)
       const excluded = skip.get(i)
       const leave = excluded === undefined ? false : excluded === lower ? true : codePoints(excluded)
       const sfx = this.suffixes[i]!.longestSharedCodes(codes, leave)
-      const shared = this.sharedFeatures(v, i, sfx, stems, excluded !== undefined)
+      const shared = this.sharedFeatures(v, i, sfx, stems, fit, excluded !== undefined)
       this.sideFeatures(i, lower, cls, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.
       const left = this.leftId[i]!
@@ -232,8 +240,10 @@ export class CandidateFinder {
     const groups = this.byEnding.get(upos)
     if (!groups) return []
     const out: number[] = []
-    for (let k = 0; k <= lemma.length; k++) {
-      const g = groups.get(lemma.slice(lemma.length - k))
+    // Only the lengths some ending has, shortest first (as every length would be tried).
+    for (const k of this.endingLengths.get(upos)!) {
+      if (k > lemma.length) break
+      const g = groups.get(k === 0 ? '' : lemma.slice(lemma.length - k))
       if (g) out.push(...g)
     }
     return groups.size === 1 ? out : out.sort((a, b) => a - b)
@@ -244,13 +254,14 @@ export class CandidateFinder {
     index: number,
     { length, count, wholeMember }: { length: number; count: number; wholeMember: boolean },
     stems: string[],
+    fit: number,
     self: boolean,
   ): string[] {
     const len = Math.min(length, 8)
     // A twin's size is its original's (its mirrored members).
     const members = (p.twinOf < 0 ? p.members : this.analogyMembers[index]!) - (self ? 1 : 0)
     const vars = stems.length - (p.openPrefix ? 1 : 0)
-    const deficit = Math.min(6, 6 * vars - viewFit(stems, p))
+    const deficit = Math.min(6, 6 * vars - fit)
     const f = [
       names.sfx(len),
       names.sfxCount(len, count),
@@ -267,14 +278,15 @@ export class CandidateFinder {
   /** Whether the lemma has letters of the paradigm's side of a learned swap, and of the other side. */
   private sideFeatures(i: number, lower: string, cls: number, out: string[]): void {
     const side = this.sides[i]!
+    if (side < 0) return
     const p = this.paradigms[i]!
     const twin = p.twinOf !== undefined
     const paired = this.paired[i]!
-    if (side >= 0 && this.twinOptions?.harmony) {
+    if (this.twinOptions?.harmony) {
       // The lemma's class against the paradigm's side, shared and per paradigm (neutral words: learned).
       out.push(`hv:${side}:${cls}`, `hv:${cls}|${i}`)
     }
-    if (side < 0 || !(paired || this.twinOptions?.sides)) return
+    if (!(paired || this.twinOptions?.sides)) return
     const letters = this.letterSide.get(p.upos)!
     let hasOwn = 0
     let hasOther = 0

@@ -4,18 +4,18 @@
 import type { Cell, Lexicon } from '../lexicon/lexicon.ts'
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
+import { cellColumns, columnHash, sameColumn } from './cell-columns.ts'
+import { type CellGroups, groupCells } from './cell-groups.ts'
 import type { ModifierFilter } from './compound-prefix.ts'
 import { type EditFactor, reweigh, ruleLeadP } from './edit-factor.ts'
-import { cellColumns, columnHash, sameColumn } from './cell-columns.ts'
 import { sampleByClass } from './example-sample.ts'
 import { type FeatureOptions, lemmaFeatures } from './features.ts'
-import { type Paradigm, paradigmShapeKey } from './paradigm.ts'
-import { extractPattern, fillPattern } from './pattern.ts'
+import type { Paradigm } from './paradigm.ts'
+import { fillPattern } from './pattern.ts'
 import { withPrior } from './prior.ts'
 import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates } from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
 import { TrainMemo } from './ranker-train.ts'
-import { StemTally } from './stem-tally.ts'
 import { tiedClasses, withTwins } from './twins.ts'
 
 /** The rules of one cell of one UPOS, with the weights that choose among them. */
@@ -52,54 +52,35 @@ export function learnCellRules(
     // A cell with the same forms as an earlier one in every table (German nominative = accusative plural)
     // has the same rules, examples and weights: copied under its own key rather than learned again.
     const columns = cellColumns(tables, keys)
-    const bySignature = new Map<number, { column: (Cell | undefined)[]; model: CellRuleModel }[]>()
-    for (const [ki, key] of keys.entries()) {
+    const bySignature = new Map<number, { column: (Cell | undefined)[]; key: string }[]>()
+    // Per cell key: the earlier key whose column it repeats, or itself when it is learned.
+    const learnedAs = keys.map((key, ki) => {
       const column = columns[ki]!
       const signature = columnHash(column)
-      const alike = bySignature.get(signature)?.find((m) => sameColumn(m.column, column))?.model
+      const alike = bySignature.get(signature)?.find((m) => sameColumn(m.column, column))
+      if (alike) return alike.key
+      const same = bySignature.get(signature)
+      if (same) same.push({ column, key })
+      else bySignature.set(signature, [{ column, key }])
+      return key
+    })
+    const wanted = keys.flatMap((key, ki) => (learnedAs[ki] === key ? [ki] : []))
+    const grouped: (CellGroups | undefined)[] = groupCells(upos, tables, columns, keys, wanted)
+    const modelOf = new Map<string, CellRuleModel>()
+    for (const [ki, key] of keys.entries()) {
+      const alike = modelOf.get(learnedAs[ki]!)
       if (alike) {
         out.push(relabel(alike, key))
         continue
       }
-      const groups = new Map<string, { rule: Paradigm; index: number; lemmas: string[]; stems: StemTally }>()
-      const own: number[] = []
-      const order: string[] = []
+      const column = columns[ki]!
+      const { groups, own, order, itemTable } = grouped[wanted.indexOf(ki)]!
+      grouped[wanted.indexOf(ki)] = undefined // its tallies are not needed once its rules are made
       // The tables with this cell, by number (their lemma and forms are read from them when needed).
-      const itemTable: number[] = []
       const item = (i: number) => {
         const t = itemTable[i]!
         const e = tables[t]!
         return { lemma: e.lemma, inherent: e.inherent, forms: column[t]!.forms, t }
-      }
-      for (const [t, e] of tables.entries()) {
-        const cell = column[t]
-        if (!cell) continue
-        const tp = extractPattern(e.lemma, [cell.forms[0]!])
-        const cells = [{ key, forms: [tp.forms[0]!] }]
-        const shape = paradigmShapeKey(upos, tp.lemma, tp.openPrefix, cells)
-        let g = groups.get(shape)
-        if (!g) {
-          g = {
-            rule: {
-              id: '',
-              upos,
-              lemma: tp.lemma,
-              openPrefix: tp.openPrefix,
-              cells,
-              members: 0,
-              examples: [],
-            },
-            index: order.length,
-            lemmas: [],
-            stems: new StemTally(),
-          }
-          groups.set(shape, g)
-          order.push(shape)
-        }
-        g.lemmas.push(e.lemma)
-        g.stems.add(tp.stems)
-        own.push(g.index)
-        itemTable.push(t)
       }
       const seen = order.map((s, i) => {
         const g = groups.get(s)!
@@ -163,9 +144,7 @@ export function learnCellRules(
       const weights = memo.train(coder.done(), withPrior(ranker, coder.added, prior))
       if (classOf) weights.classOf = classOf
       const model = { upos, key, rules, weights, finder }
-      const same = bySignature.get(signature)
-      if (same) same.push({ column, model })
-      else bySignature.set(signature, [{ column, model }])
+      modelOf.set(key, model)
       out.push(model)
     }
   }

@@ -1,12 +1,13 @@
 // A paradigm as candidate search reads it: its lemma pattern, stem shapes and sizes in one record of one
 // shape (paradigms and cell rules are objects of several shapes), and the best stem split without cutting
 // out the others.
-import { isHighSurrogate, MAX_MATCHES, matchSingle, type Paradigm, type StemShape } from './paradigm.ts'
+import { isHighSurrogate, MAX_MATCHES, type Paradigm, type StemShape } from './paradigm.ts'
 import type { Pattern } from './pattern.ts'
 
 /** A stem shape as StemShape. */
 interface ShapeView {
-  seen: readonly string[]
+  /** The seen contents by length (most are not the length asked for: they need no comparing). */
+  seenByLength: readonly (readonly string[] | undefined)[]
   first: string
   last: string
   minLength: number
@@ -23,6 +24,8 @@ export interface MatchView {
   members: number
   /** The paradigm it mirrors (twins.ts), or -1. */
   twinOf: number
+  /** When the lemma pattern is one stem between two literals (either may be ''), they: matchSingle's case. */
+  single: { before: string; after: string } | null
 }
 
 /**
@@ -38,11 +41,33 @@ export function matchView(p: Paradigm): MatchView {
     shapes: p.shapes ? p.shapes.map(shapeView) : null,
     members: p.members,
     twinOf: p.twinOf ?? -1,
+    single: singleStem(p.lemma),
+  }
+}
+
+/** The literals around the only stem of a lemma pattern, where matchSingle (paradigm.ts) decides alone. */
+function singleStem(lemma: Pattern): { before: string; after: string } | null {
+  let at = -1
+  for (let i = 0; i < lemma.length; i++) {
+    if (typeof lemma[i] !== 'number') continue
+    if (at >= 0) return null
+    at = i
+  }
+  if (at < 0 || lemma[at] !== 0 || lemma.length > at + 2 || at > 1) return null
+  return {
+    before: at === 1 ? (lemma[0] as string) : '',
+    after: at + 1 < lemma.length ? (lemma[at + 1] as string) : '',
   }
 }
 
 function shapeView(s: StemShape): ShapeView {
-  return { seen: s.seen, first: s.first, last: s.last, minLength: s.minLength, maxLength: s.maxLength }
+  const seenByLength: string[][] = []
+  for (const x of s.seen) {
+    const list = seenByLength[x.length]
+    if (list) list.push(x)
+    else seenByLength[x.length] = [x]
+  }
+  return { seenByLength, first: s.first, last: s.last, minLength: s.minLength, maxLength: s.maxLength }
 }
 
 /**
@@ -57,7 +82,7 @@ export function viewFit(stems: readonly string[], v: MatchView): number {
     const s = stems[i]!
     const sh = shapes[i]
     if (!sh) continue
-    if (s.length >= 2 && sh.seen.includes(s)) fit += 3
+    if (s.length >= 2 && sh.seenByLength[s.length]?.includes(s)) fit += 3
     if (s.length >= sh.minLength && s.length <= sh.maxLength) fit += 1
     if (s && sh.first.includes(s[0]!)) fit += 1
     if (s && sh.last.includes(s[s.length - 1]!)) fit += 1
@@ -72,8 +97,16 @@ export function viewFit(stems: readonly string[], v: MatchView): number {
  * @example viewStems(matchView(p), 'Mantel') // ['Mant', 'l']
  */
 export function viewStems(v: MatchView, lemma: string): string[] | null {
-  const single = matchSingle(v.lemma, v.openPrefix, lemma)
-  if (single !== undefined) return single[0] ?? null
+  lastFit = -1
+  if (v.single) {
+    // As matchSingle: the one stem is what the literals leave.
+    const { before, after } = v.single
+    const end = lemma.length - after.length
+    if (end < before.length + (v.openPrefix ? 0 : 1) || !lemma.startsWith(before) || !lemma.endsWith(after))
+      return null
+    if (end < lemma.length && isHighSurrogate(lemma.charCodeAt(end - 1))) return null
+    return [lemma.slice(before.length, end)]
+  }
   const s = search
   s.view = v
   s.word = lemma
@@ -96,9 +129,21 @@ export function viewStems(v: MatchView, lemma: string): string[] | null {
   step(s, 0, 0)
   s.word = ''
   if (s.found === 0) return null
+  lastFit = s.bestFit
   const stems: string[] = []
   for (let i = 0; i < s.vars; i++) stems.push(lemma.slice(s.bestFrom[i]!, s.bestTo[i]!))
   return stems
+}
+
+/** The viewFit of the stems the last viewStems call returned when its search scored them already, else -1. */
+let lastFit = -1
+
+/**
+ * viewFit of the stems viewStems has just returned for this view (the search knows it when it had to choose).
+ * @example const stems = viewStems(v, 'Mantel'); stems && fitOfMatch(stems, v) // 4
+ */
+export function fitOfMatch(stems: readonly string[], v: MatchView): number {
+  return lastFit >= 0 ? lastFit : viewFit(stems, v)
 }
 
 /** The state of one viewStems search, reused (matching is synchronous); `dead` as in paradigm.ts. */
@@ -132,15 +177,33 @@ function step(s: typeof search, part: number, pos: number): void {
       if (word.startsWith(p, pos)) step(s, part + 1, pos + p.length)
     } else {
       const min = p === 0 && view.openPrefix ? 0 : 1
-      // A variable followed by a literal can only end where that literal starts.
       const next = lemma[part + 1]
-      for (let end = n; end >= pos + min; end--) {
-        if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
-        if (typeof next === 'string' && !word.startsWith(next, end)) continue
-        if (next === undefined && end !== n) continue
-        s.from[p] = pos
-        s.to[p] = end
-        step(s, part + 1, end)
+      if (typeof next === 'string') {
+        // A variable followed by a literal can only end where that literal starts: its places, last first.
+        let end = word.lastIndexOf(next, n)
+        while (end >= pos + min) {
+          if (!(end < n && isHighSurrogate(word.charCodeAt(end - 1)))) {
+            s.from[p] = pos
+            s.to[p] = end
+            step(s, part + 1, end)
+          }
+          if (end === 0) break
+          end = word.lastIndexOf(next, end - 1)
+        }
+      } else if (next === undefined) {
+        // The last part: the variable takes the rest.
+        if (n >= pos + min) {
+          s.from[p] = pos
+          s.to[p] = n
+          step(s, part + 1, n)
+        }
+      } else {
+        for (let end = n; end >= pos + min; end--) {
+          if (end < n && isHighSurrogate(word.charCodeAt(end - 1))) continue
+          s.from[p] = pos
+          s.to[p] = end
+          step(s, part + 1, end)
+        }
       }
     }
   }
@@ -159,7 +222,7 @@ function found(s: typeof search): void {
       const a = s.from[i]!
       const b = s.to[i]!
       const len = b - a
-      if (len >= 2 && seenAt(sh.seen, word, a, len)) fit += 3
+      if (len >= 2 && seenAt(sh.seenByLength[len], word, a)) fit += 3
       if (len >= sh.minLength && len <= sh.maxLength) fit += 1
       if (len > 0 && sh.first.includes(word[a]!)) fit += 1
       if (len > 0 && sh.last.includes(word[b - 1]!)) fit += 1
@@ -175,8 +238,8 @@ function found(s: typeof search): void {
   s.found++
 }
 
-/** Whether some seen content is the `len` code units of `word` from `at` (no substring made). */
-function seenAt(seen: readonly string[], word: string, at: number, len: number): boolean {
-  for (const x of seen) if (x.length === len && word.startsWith(x, at)) return true
+/** Whether some seen content (of one length) is what `word` has from `at` (no substring made). */
+function seenAt(seen: readonly string[] | undefined, word: string, at: number): boolean {
+  if (seen) for (const x of seen) if (word.startsWith(x, at)) return true
   return false
 }

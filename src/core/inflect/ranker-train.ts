@@ -21,17 +21,16 @@ export function trainRanker(examples: RankerExample[], opts: RankerOptions): Ran
  */
 export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights {
   const count = c.start.length - 1
-  const wl = new Float64Array(c.pairCount)
-  const gl = new Float64Array(c.pairCount)
-  const ws = new Float64Array(c.sharedNames.length)
-  const gs = new Float64Array(c.sharedNames.length)
+  // Each weight lies beside its squared-gradient sum (weight at 2k, sum at 2k + 1): an update reads one cache
+  // line, not two. The local pair slots come first, then the shared features (see trainable).
+  const w = new Float64Array(2 * (c.pairCount + c.sharedNames.length))
   const rand = mulberry32(opts.seed)
   const order = Array.from({ length: count }, (_, i) => i)
   const { rate, l2 } = opts
   const { start, gold } = c
   // Slots outside the supported set (see RankerOptions.support) stay 0: never updated, never written, so they
   // are left out of the candidates' slot lists (adding a zero weight changes no score).
-  const { candStart, localCount, ids } = trainable(c, supportedSlots(c, opts, count))
+  const { candStart, ids } = trainable(c, supportedSlots(c, opts, count))
   const scores = new Float64Array(c.maxCandidates)
   const p = new Float64Array(c.maxCandidates)
   for (let epoch = 0; epoch < opts.epochs; epoch++) {
@@ -45,15 +44,12 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
       const idx = order[o]!
       const c0 = start[idx]!
       const n = start[idx + 1]! - c0
-      // Candidate i's ids start at candStart[c0 + i]: its local weight slots (localCount), then its shared features.
+      // Candidate i's ids start at candStart[c0 + i]: its local weight slots, then its shared features.
       let max = Number.NEGATIVE_INFINITY
       for (let i = 0; i < n; i++) {
-        const base = candStart[c0 + i]!
-        const l1 = base + localCount[c0 + i]!
-        let v = 0
-        for (let k = base; k < l1; k++) v += wl[ids[k]!]!
         const s1 = candStart[c0 + i + 1]!
-        for (let k = l1; k < s1; k++) v += ws[ids[k]!]!
+        let v = 0
+        for (let k = candStart[c0 + i]!; k < s1; k++) v += w[ids[k]!]!
         scores[i] = v
         if (v > max) max = v
       }
@@ -72,20 +68,13 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
       for (let i = 0; i < n; i++) {
         const grad = p[i]! - (gold[c0 + i] ? p[i]! / zg : 0)
         if (Math.abs(grad) < 1e-6) continue
-        const base = candStart[c0 + i]!
-        const l1 = base + localCount[c0 + i]!
-        for (let j = base; j < l1; j++) {
-          const k = ids[j]!
-          const g = grad + l2 * wl[k]!
-          gl[k]! += g * g
-          wl[k]! -= (rate * g) / Math.sqrt(gl[k]! + 1e-8)
-        }
         const s1 = candStart[c0 + i + 1]!
-        for (let s = l1; s < s1; s++) {
-          const f = ids[s]!
-          const g = grad + l2 * ws[f]!
-          gs[f]! += g * g
-          ws[f]! -= (rate * g) / Math.sqrt(gs[f]! + 1e-8)
+        for (let j = candStart[c0 + i]!; j < s1; j++) {
+          const k = ids[j]!
+          const g = grad + l2 * w[k]!
+          const sum = w[k + 1]! + g * g
+          w[k + 1] = sum
+          w[k]! -= (rate * g) / Math.sqrt(sum + 1e-8)
         }
       }
     }
@@ -94,42 +83,43 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
   const prune = count >= (opts.pruneFrom ?? 0) ? (opts.prune ?? 0) : 0
   const { pairFeature, pairClass, localNames } = c
   const kept: number[] = []
-  for (let s = 0; s < c.pairCount; s++) if (wl[s] !== 0 && Math.abs(wl[s]!) >= prune) kept.push(s)
+  for (let s = 0; s < c.pairCount; s++) if (w[2 * s] !== 0 && Math.abs(w[2 * s]!) >= prune) kept.push(s)
   kept.sort((a, b) => pairFeature[a]! - pairFeature[b]! || pairClass[a]! - pairClass[b]!) // feature order, then class
-  for (const s of kept) out.local.set(`${localNames[pairFeature[s]!]}\u0000${pairClass[s]}`, wl[s]!)
+  for (const s of kept) out.local.set(`${localNames[pairFeature[s]!]}\u0000${pairClass[s]}`, w[2 * s]!)
   c.sharedNames.forEach((f, fi) => {
-    if (ws[fi] !== 0) out.shared.set(f, ws[fi]!)
+    const v = w[2 * (c.pairCount + fi)]!
+    if (v !== 0) out.shared.set(f, v)
   })
   return out
 }
 
 /**
- * The candidates' id lists with the slots that may not learn left out: candidate c's ids start at
- * candStart[c], its first localCount[c] are its local weight slots, the rest up to candStart[c + 1] its
- * shared features. Without a mask, the coded lists as they are.
+ * The candidates' id lists as positions in the interleaved weight array, with the slots that may not learn
+ * left out: candidate c's ids are ids[candStart[c]] up to candStart[c + 1], its local weight slots first
+ * (slot s at 2s), then its shared features (feature f at 2 (pairCount + f)). Without a mask every local slot.
  */
-function trainable(
-  c: CodedExamples,
-  allowed: Uint8Array | null,
-): { candStart: Int32Array; localCount: Int32Array; ids: Int32Array } {
+function trainable(c: CodedExamples, allowed: Uint8Array | null): { candStart: Int32Array; ids: Int32Array } {
   const cands = c.candStart.length - 1
-  const localCount = new Int32Array(cands)
-  const examples = c.start.length - 1
-  for (let e = 0; e < examples; e++) localCount.fill(c.width[e]!, c.start[e]!, c.start[e + 1]!)
-  if (!allowed) return { candStart: c.candStart, localCount, ids: c.ids }
   const candStart = new Int32Array(cands + 1)
   const ids = new Int32Array(c.ids.length)
+  const sharedAt = 2 * c.pairCount
+  const examples = c.start.length - 1
   let at = 0
-  for (let k = 0; k < cands; k++) {
-    candStart[k] = at
-    const base = c.candStart[k]!
-    const l1 = base + localCount[k]!
-    for (let j = base; j < l1; j++) if (allowed[c.ids[j]!]) ids[at++] = c.ids[j]!
-    localCount[k] = at - candStart[k]!
-    for (let j = l1; j < c.candStart[k + 1]!; j++) ids[at++] = c.ids[j]!
+  for (let e = 0; e < examples; e++) {
+    const width = c.width[e]!
+    for (let k = c.start[e]!; k < c.start[e + 1]!; k++) {
+      candStart[k] = at
+      const base = c.candStart[k]!
+      const l1 = base + width
+      for (let j = base; j < l1; j++) {
+        const slot = c.ids[j]!
+        if (!allowed || allowed[slot]) ids[at++] = 2 * slot
+      }
+      for (let j = l1; j < c.candStart[k + 1]!; j++) ids[at++] = sharedAt + 2 * c.ids[j]!
+    }
   }
   candStart[cands] = at
-  return { candStart, localCount, ids: ids.subarray(0, at) }
+  return { candStart, ids: ids.subarray(0, at) }
 }
 
 /**
