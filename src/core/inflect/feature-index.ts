@@ -59,31 +59,14 @@ export class FeatureIndex {
     if (this.slots) return this.slots.get(f)
     const p = this.table!.position.get(f)
     if (p === undefined) return undefined
-    const ids = this.positions!
-    let a = 0
-    let b = ids.length - 1
-    while (a <= b) {
-      const m = (a + b) >> 1
-      const x = ids[m]!
-      if (x === p) return m
-      if (x < p) a = m + 1
-      else b = m - 1
-    }
-    return undefined
+    const k = findSorted(this.positions!, 0, this.positions!.length, p)
+    return k < 0 ? undefined : k
   }
 
   /** The weight of class `c` in slot `s`, or undefined (binary search). */
   weightOf(s: number, c: number): number | undefined {
-    let a = this.start[s]!
-    let b = this.start[s + 1]! - 1
-    while (a <= b) {
-      const m = (a + b) >> 1
-      const x = this.cls[m]!
-      if (x === c) return this.weight[m]
-      if (x < c) a = m + 1
-      else b = m - 1
-    }
-    return undefined
+    const k = findSorted(this.cls, this.start[s]!, this.start[s + 1]!, c)
+    return k < 0 ? undefined : this.weight[k]
   }
 
   /** Every (feature, class, weight), feature by feature in slot order, classes ascending. */
@@ -95,6 +78,23 @@ export class FeatureIndex {
       for (let k = this.start[s]!; k < this.start[s + 1]!; k++) yield [f, this.cls[k]!, this.weight[k]!] as const
     }
   }
+}
+
+/**
+ * Where `x` is in the ascending run `a[from]` … `a[to − 1]`, or −1 (binary search).
+ * @example findSorted(Int32Array.of(2, 5, 9), 0, 3, 5) // 1
+ */
+export function findSorted(a: ArrayLike<number>, from: number, to: number, x: number): number {
+  let lo = from
+  let hi = to - 1
+  while (lo <= hi) {
+    const m = (lo + hi) >> 1
+    const y = a[m]!
+    if (y === x) return m
+    if (y < x) lo = m + 1
+    else hi = m - 1
+  }
+  return -1
 }
 
 /** The slots' (class, weight) pairs end to end, and where each slot starts. */

@@ -1,6 +1,7 @@
 // How likely each rewrite is for a form, from the endings of the dictionary's own forms.
 // Suffix-conditioned counts with Dirichlet (MacKay & Peto 1995) backoff from longer to shorter endings,
 // in the manner of suffix-based guessing of unknown words (Samuelsson 1993; Brants 2000, TnT).
+import { findSorted } from '../inflect/feature-index.ts'
 import type { InflectionModel } from '../inflect/learn.ts'
 import { matchStems } from '../inflect/paradigm.ts'
 import { fillPattern, type Pattern } from '../inflect/pattern.ts'
@@ -89,29 +90,12 @@ export class RulePrior {
   }
 
   private child(node: number, u: number): number {
-    let a = this.first[node]!
-    let b = this.first[node + 1]! - 1
-    while (a <= b) {
-      const m = (a + b) >> 1
-      const x = this.unit[m]!
-      if (x === u) return m
-      if (x < u) a = m + 1
-      else b = m - 1
-    }
-    return -1
+    return findSorted(this.unit, this.first[node]!, this.first[node + 1]!, u)
   }
 
   private countOf(node: number, id: number): number {
-    let a = this.pairAt[node]!
-    let b = this.pairAt[node + 1]! - 1
-    while (a <= b) {
-      const m = (a + b) >> 1
-      const x = this.pairRule[m]!
-      if (x === id) return this.pairCount[m]!
-      if (x < id) a = m + 1
-      else b = m - 1
-    }
-    return 0
+    const k = findSorted(this.pairRule, this.pairAt[node]!, this.pairAt[node + 1]!, id)
+    return k < 0 ? 0 : this.pairCount[k]!
   }
 }
 
