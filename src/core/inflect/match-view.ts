@@ -1,7 +1,7 @@
 // A paradigm as candidate search reads it: its lemma pattern, stem shapes and sizes in one record of one
 // shape (paradigms and cell rules are objects of several shapes), and the best stem split without cutting
 // out the others.
-import { isHighSurrogate, MAX_MATCHES, type Paradigm, type StemShape } from './paradigm.ts'
+import { beginSearch, isHighSurrogate, MAX_MATCHES, type Paradigm, type StemShape } from './paradigm.ts'
 import type { Pattern } from './pattern.ts'
 
 /** A stem shape as StemShape. */
@@ -111,20 +111,10 @@ export function viewStems(v: MatchView, lemma: string): string[] | null {
   s.view = v
   s.word = lemma
   s.found = 0
-  s.vars = 0
-  for (const p of v.lemma) if (typeof p === 'number' && p >= s.vars) s.vars = p + 1
-  const states = (v.lemma.length + 1) * (lemma.length + 1)
-  if (states > s.dead.length) s.dead = new Int32Array(2 * states)
-  if (s.vars > s.from.length) {
-    s.from = new Int32Array(2 * s.vars)
-    s.to = new Int32Array(2 * s.vars)
+  beginSearch(s, v.lemma, lemma.length)
+  if (s.vars > s.bestFrom.length) {
     s.bestFrom = new Int32Array(2 * s.vars)
     s.bestTo = new Int32Array(2 * s.vars)
-  }
-  s.call = (s.call + 1) | 0
-  if (s.call === 0) {
-    s.dead.fill(0)
-    s.call = 1
   }
   step(s, 0, 0)
   s.word = ''

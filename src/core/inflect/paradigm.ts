@@ -53,6 +53,36 @@ export interface StemShape {
 
 export const MAX_MATCHES = 64
 
+/** What a stem search reuses between searches: stem bounds, and dead (part, position) marks stamped by search. */
+export interface SearchScratch {
+  vars: number
+  dead: Int32Array
+  from: Int32Array
+  to: Int32Array
+  call: number
+}
+
+/**
+ * Ready the scratch for searching `pattern` over a word of `length` letters: count its stem variables, grow
+ * the arrays if needed, and take a new stamp (clearing the marks when the stamps wrap round).
+ * @example beginSearch(scratch, [0, 'en'], 'sagen'.length); scratch.vars // 1
+ */
+export function beginSearch(s: SearchScratch, pattern: Pattern, length: number): void {
+  s.vars = 0
+  for (const p of pattern) if (typeof p === 'number' && p >= s.vars) s.vars = p + 1
+  const states = (pattern.length + 1) * (length + 1)
+  if (states > s.dead.length) s.dead = new Int32Array(2 * states)
+  if (s.vars > s.from.length) {
+    s.from = new Int32Array(2 * s.vars)
+    s.to = new Int32Array(2 * s.vars)
+  }
+  s.call = (s.call + 1) | 0
+  if (s.call === 0) {
+    s.dead.fill(0)
+    s.call = 1
+  }
+}
+
 /**
  * Every way a lemma fits a lemma pattern (stem variables non-empty, an open prefix may be empty), greedy first.
  * @example matchAll([0, 'a', 1], false, 'Kanal') // [['Kan', 'l'], ['K', 'nal']]
@@ -65,19 +95,7 @@ export function matchAll(lemma: Pattern, openPrefix: boolean, word: string): str
   search.openPrefix = openPrefix
   search.word = word
   search.out = []
-  search.vars = 0
-  for (const p of lemma) if (typeof p === 'number' && p >= search.vars) search.vars = p + 1
-  const states = (lemma.length + 1) * (word.length + 1)
-  if (states > search.dead.length) search.dead = new Int32Array(2 * states)
-  if (search.vars > search.from.length) {
-    search.from = new Int32Array(2 * search.vars)
-    search.to = new Int32Array(2 * search.vars)
-  }
-  search.call = (search.call + 1) | 0
-  if (search.call === 0) {
-    search.dead.fill(0)
-    search.call = 1
-  }
+  beginSearch(search, lemma, word.length)
   step(search, 0, 0)
   const out = search.out
   search.out = []
