@@ -2,17 +2,18 @@
 // table rows, growth over sample fractions, and the model at the largest size (lemmas, forms, bytes, load time).
 // A seeded, evenly spread sample of the lemmas is used when all of them take too long (--lemmas N; 0 = all).
 // Every fifth sampled lemma becomes a lemma-only entry, so the model holds predicted tables too.
-// Run: npx tsx bench/scale-learn.ts -- [--lemmas 3000] [--fractions 0.1,0.3,1] [--save MODEL.json[.gz]] [--json]
+// Learning runs as `formfold learn` does: on one thread per core (--jobs), parts of speech side by side.
+// Run: npx tsx bench/scale-learn.ts -- [--lemmas 3000] [--fractions 0.1,0.3,1] [--jobs N] [--save MODEL.json[.gz]] [--json]
 // All lemmas (--lemmas 0) need a larger heap: node --max-old-space-size=16000 --import tsx bench/scale-learn.ts …
 import { writeFileSync } from 'node:fs'
 import { Readable } from 'node:stream'
 import { fileURLToPath } from 'node:url'
 import { parseArgs } from 'node:util'
 import { type Entry, rowsToEntries } from '../src/core/lexicon/entry.ts'
-import { buildModel } from '../src/core/model/build-model.ts'
 import { decodeModel } from '../src/core/model/decode-model.ts'
 import { encodeModel } from '../src/core/model/encode-model.ts'
 import { gzipModelText } from '../src/cli/model-file.ts'
+import { buildModelThreaded, defaultJobs } from '../src/cli/threaded-learn.ts'
 import { readLexicon } from '../src/formats/index.ts'
 import { loadGermanNpm } from '../test/support/german-npm.ts'
 
@@ -30,11 +31,15 @@ export interface LearnPoint {
   /** The same file gzip-compressed, as `formfold learn -o model.json.gz` writes it. */
   gzipBytes: number
   loadSeconds: number
+  /** Threads learning was allowed. */
+  jobs: number
 }
 
 /** Every k-th lemma of verbs, nouns then adjectives, so a sample spreads over the alphabet and all three sets. */
 function sample(limit: number): Entry[] {
-  const all = (['verbs', 'nouns', 'adjectives'] as const).flatMap((set) => rowsToEntries(loadGermanNpm(set).rows))
+  const all = (['verbs', 'nouns', 'adjectives'] as const).flatMap((set) =>
+    rowsToEntries(loadGermanNpm(set).rows),
+  )
   if (limit <= 0 || limit >= all.length) return all
   const step = all.length / limit
   return Array.from({ length: limit }, (_, i) => all[Math.floor(i * step)]!)
@@ -51,7 +56,12 @@ function tsvOf(entries: Entry[]): string {
  * Parse the rows of `entries`' first `fraction`, then learn a model from them (spread evenly; 1 in 5 as lemma-only).
  * @example (await measureLearn(sample(300), 1)).learnSeconds
  */
-export async function measureLearn(entries: Entry[], fraction: number, save?: string): Promise<LearnPoint> {
+export async function measureLearn(
+  entries: Entry[],
+  fraction: number,
+  save?: string,
+  jobs = defaultJobs(),
+): Promise<LearnPoint> {
   const count = Math.round(entries.length * fraction)
   const part = Array.from({ length: count }, (_, j) => entries[Math.floor(j / fraction)]!) // spread evenly
   const input = part.map((e, i): Entry => (i % 5 === 4 ? { lemma: e.lemma, upos: e.upos, feats: '_' } : e))
@@ -63,7 +73,7 @@ export async function measureLearn(entries: Entry[], fraction: number, save?: st
   const parseSeconds = (performance.now() - t) / 1000
   const lemmaOnly = input.filter((e) => !e.forms)
   t = performance.now()
-  const model = buildModel([...read.entries, ...lemmaOnly])
+  const model = await buildModelThreaded([...read.entries, ...lemmaOnly], {}, undefined, jobs)
   const learnSeconds = (performance.now() - t) / 1000
   const encoded = encodeModel(model)
   const packed = gzipModelText(encoded)
@@ -82,17 +92,23 @@ export async function measureLearn(entries: Entry[], fraction: number, save?: st
     modelBytes: Buffer.byteLength(encoded),
     gzipBytes: packed.byteLength,
     loadSeconds,
+    jobs,
   }
 }
 
 /** Growth and learn/parse over the given fractions of a sample of `lemmas` German lemmas. */
-export async function measureGrowth(lemmas: number, fractions: number[], save?: string) {
+export async function measureGrowth(
+  lemmas: number,
+  fractions: number[],
+  save?: string,
+  jobs = defaultJobs(),
+) {
   const entries = sample(lemmas)
   const points: LearnPoint[] = []
   for (const f of fractions) {
-    const p = await measureLearn(entries, f, f === fractions.at(-1) ? save : undefined)
+    const p = await measureLearn(entries, f, f === fractions.at(-1) ? save : undefined, jobs)
     process.stderr.write(
-      `learn ${(f * 100).toFixed(0)}% (${p.lemmas} lemmas, ${p.tables} tables, ${p.rows} rows): parse ${p.parseSeconds.toFixed(3)} s, learn ${p.learnSeconds.toFixed(1)} s; ${p.forms} forms, ${p.modelBytes} bytes (${p.gzipBytes} gzip), load ${p.loadSeconds.toFixed(2)} s\n`,
+      `learn ${(f * 100).toFixed(0)}% (${p.lemmas} lemmas, ${p.tables} tables, ${p.rows} rows): parse ${p.parseSeconds.toFixed(3)} s, learn ${p.learnSeconds.toFixed(1)} s (up to ${p.jobs} threads); ${p.forms} forms, ${p.modelBytes} bytes (${p.gzipBytes} gzip), load ${p.loadSeconds.toFixed(2)} s\n`,
     )
     points.push(p)
   }
@@ -114,8 +130,15 @@ if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
       fractions: { type: 'string', default: '0.1,0.3,1' },
       json: { type: 'boolean', default: false },
       save: { type: 'string' },
+      jobs: { type: 'string' },
     },
   })
-  const r = await measureGrowth(Number(values.lemmas), values.fractions!.split(',').map(Number), values.save)
+  const jobs = values.jobs ? Number(values.jobs) : defaultJobs()
+  const r = await measureGrowth(
+    Number(values.lemmas),
+    values.fractions!.split(',').map(Number),
+    values.save,
+    jobs,
+  )
   if (values.json) process.stdout.write(`${JSON.stringify(r)}\n`)
 }

@@ -1,11 +1,10 @@
 // Learning: lexicon → paradigm book → ranker that assigns paradigms to lemmas from their shape.
 import type { Entry } from '../lexicon/entry.ts'
-import { buildLexicon, type LexEntry, type Lexicon } from '../lexicon/lexicon.ts'
+import { buildLexicon, type Lexicon } from '../lexicon/lexicon.ts'
 import {
   type Alternations,
   DEFAULT_TWIN_OPTIONS,
   learnAlternations,
-  mirror,
   type TwinOptions,
 } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
@@ -13,20 +12,12 @@ import { type CellRuleModel, learnCellRules } from './cell-rules.ts'
 import { modifierFilterOf } from './compound-prefix.ts'
 import type { CorpusEvidence } from './corpus-evidence.ts'
 import { type EditFactors, learnEditFactors } from './edit-factor.ts'
-import { sampleByClass } from './example-sample.ts'
-import { extractParadigms, type ParadigmBook, reproducesWith, type StemKind } from './extract.ts'
-import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions, lemmaFeatures } from './features.ts'
-import { withPrior } from './prior.ts'
-import {
-  DEFAULT_RANKER_OPTIONS,
-  type RankerExample,
-  type RankerOptions,
-  type RankerWeights,
-} from './ranker.ts'
-import { ExampleCoder } from './ranker-coding.ts'
-import { trainCoded } from './ranker-train.ts'
+import { extractParadigms, type ParadigmBook, type StemKind } from './extract.ts'
+import { DEFAULT_FEATURE_OPTIONS, type FeatureOptions } from './features.ts'
+import { DEFAULT_RANKER_OPTIONS, type RankerOptions, type RankerWeights } from './ranker.ts'
 import { chooseStemKind } from './stem-choice.ts'
-import { tiedClasses, withTwins } from './twins.ts'
+import { trainTableRanker } from './table-ranker.ts'
+import { withTwins } from './twins.ts'
 
 /** How the whole-table ranker and the per-cell rule rankers are combined (see predict.ts). */
 export interface CombineOptions {
@@ -124,7 +115,11 @@ export function learnInflection(
  */
 export function stemKindOf(lexicon: Lexicon, options: LearnOptions = DEFAULT_LEARN_OPTIONS): StemKind {
   return options.stems === 'choose'
-    ? chooseStemKind(lexicon, (lex, k) => learnFromLexicon(lex, { ...options, stems: k }), options.stemSample ?? 400)
+    ? chooseStemKind(
+        lexicon,
+        (lex, k) => learnFromLexicon(lex, { ...options, stems: k }),
+        options.stemSample ?? 400,
+      )
     : (options.stems ?? 'lcs')
 }
 
@@ -133,8 +128,40 @@ export function learnFromLexicon(
   lexicon: Lexicon,
   options: LearnOptions = DEFAULT_LEARN_OPTIONS,
 ): InflectionModel {
+  const start = startLearning(lexicon, options)
+  const { book, finder } = twinBook(lexicon, start, options)
+  const weights = trainTableRanker(lexicon, book, finder, start.alternations, options)
+  const cells = learnCells(lexicon, start.alternations, options)
+  const edits = learnEdits(lexicon, book, options)
+  const { alternations } = start
+  return { lexicon, book, alternations, weights, finder, cells, options, ...(edits && { edits }) }
+}
+
+/** The first step of learning: the tables cut into paradigms (before twins), and the letter swap they show. */
+export interface LearnStart {
+  learned: ParadigmBook
+  alternations: Alternations
+}
+
+/**
+ * Cut the lexicon's tables into paradigms (as `options.stems` says) and learn the letter swap of each UPOS.
+ * @example startLearning(lexicon).learned.paradigms.length // 136
+ */
+export function startLearning(lexicon: Lexicon, options: LearnOptions = DEFAULT_LEARN_OPTIONS): LearnStart {
   const learned = extractParadigms(lexicon, stemKindOf(lexicon, options))
-  const alternations = learnAlternations(learned.paradigms, options.twins)
+  return { learned, alternations: learnAlternations(learned.paradigms, options.twins) }
+}
+
+/**
+ * The book of learned paradigms and their twins, the candidate finder over it, and each paradigm's member
+ * lemmas (a twin's mirrored), from which another thread builds the same finder.
+ * @example twinBook(lexicon, startLearning(lexicon)).finder.find('Mantel', 'NOUN').length // 3
+ */
+export function twinBook(
+  lexicon: Lexicon,
+  { learned, alternations }: LearnStart,
+  options: LearnOptions = DEFAULT_LEARN_OPTIONS,
+): { book: ParadigmBook; finder: CandidateFinder; members: string[][] } {
   const own: string[][] = learned.paradigms.map(() => [])
   learned.memberOf.forEach((p, i) => {
     if (p >= 0) own[p]!.push(lexicon.entries[i]!.lemma)
@@ -142,69 +169,40 @@ export function learnFromLexicon(
   const twinned = withTwins(learned.paradigms, own, alternations)
   const book: ParadigmBook = { paradigms: twinned.paradigms, memberOf: learned.memberOf }
   const finder = new CandidateFinder(book.paradigms, twinned.members, alternations, options.twins)
-  const classOf = options.twins?.tie ? tiedClasses(book.paradigms, alternations) : undefined
-  const twinOf = new Map(
-    book.paradigms.flatMap((p, i) => (p.twinOf === undefined ? [] : [[p.twinOf, i] as const])),
-  )
-  const tables = lexicon.entries.flatMap((e, i) => (e.cells ? [i] : []))
-  const picked = sampleByClass(
-    tables.map((i) => book.memberOf[i]!),
-    options.ranker.maxExamples ?? 0,
-    options.ranker.seed,
-  )
-  const modifiers = options.compounds && modifierFilterOf(lexicon.entries, options.compounds.minHead)
-  const example = (e: LexEntry, own: number): RankerExample => {
-    const found = finder.find(e.lemma, e.upos, own)
-    const gold: number[] = []
-    found.forEach((c, k) => {
-      if (c.paradigm === own || reproducesWith(book.paradigms[c.paradigm]!, e, c.stems)) gold.push(k)
-    })
-    return {
-      local: lemmaFeatures(e.lemma, e.inherent, options.features),
-      candidates: found.map((c) => classOf?.[c.paradigm] ?? c.paradigm),
-      shared: found.map((c) => c.shared),
-      gold,
-    }
-  }
-  const coder = new ExampleCoder()
-  for (const t of picked) coder.add(example(lexicon.entries[tables[t]!]!, book.memberOf[tables[t]!]!))
-  // A table whose paradigm has a twin, mirrored, is what the twin's members would look like: training on
-  // these copies teaches the ranker when a twin applies (they are never entries of the model).
-  if (options.twins?.mirrorTables) {
-    for (const t of picked) {
-      const e = lexicon.entries[tables[t]!]!
-      const twin = twinOf.get(book.memberOf[tables[t]!]!)
-      const copy = twin === undefined ? null : mirrorEntry(e, alternations[e.upos]!)
-      // A copy whose harmony letters the swap left on both sides would contradict the harmony features.
-      const consistent = copy && (!options.twins.harmony || finder.oneSide(copy.lemma, copy.upos))
-      if (consistent) coder.add(example(copy, twin!))
-    }
-  }
-  const weights = trainCoded(coder.done(), withPrior(options.ranker, coder.added, options.prior))
-  if (classOf) weights.classOf = classOf
-  const cells =
-    options.combine.cellWeight > 0 || options.combine.cellMix > 0
-      ? learnCellRules(
-          lexicon,
-          options.features,
-          { ...options.ranker, ...options.cellRanker },
-          alternations,
-          options.twins,
-          options.prior,
-          modifiers,
-        )
-      : []
-  const edits = options.edits && learnEditFactors(lexicon.entries, book.paradigms, book.memberOf, options.ranker)
-  return { lexicon, book, alternations, weights, finder, cells, options, ...(edits && { edits }) }
+  return { book, finder, members: twinned.members }
 }
 
-/** An entry with a letter swap applied to its lemma and forms, or null when the swap leaves its lemma alone. */
-export function mirrorEntry(e: LexEntry, swap: Readonly<Record<string, string>>): LexEntry | null {
-  const lemma = mirror(e.lemma, swap)
-  if (lemma === e.lemma || !e.cells) return null
-  return {
-    ...e,
-    lemma,
-    cells: e.cells.map((c) => ({ key: c.key, forms: c.forms.map((f) => mirror(f, swap)) })),
-  }
+/**
+ * The per-cell rule rankers of the lexicon's UPOS tags, or of `only` those (each UPOS is learned on its own, so
+ * parallel learning may split the work by UPOS).
+ */
+export function learnCells(
+  lexicon: Lexicon,
+  alternations: Alternations,
+  options: LearnOptions = DEFAULT_LEARN_OPTIONS,
+  only?: ReadonlySet<string>,
+): CellRuleModel[] {
+  if (options.combine.cellWeight <= 0 && options.combine.cellMix <= 0) return []
+  const modifiers = options.compounds && modifierFilterOf(lexicon.entries, options.compounds.minHead)
+  const cellKeys = only
+    ? Object.fromEntries(Object.entries(lexicon.cellKeys).filter(([u]) => only.has(u)))
+    : lexicon.cellKeys
+  return learnCellRules(
+    { ...lexicon, cellKeys },
+    options.features,
+    { ...options.ranker, ...options.cellRanker },
+    alternations,
+    options.twins,
+    options.prior,
+    modifiers,
+  )
+}
+
+/** The word-initial edit factors of the book (absent unless `options.edits`). */
+export function learnEdits(
+  lexicon: Lexicon,
+  book: ParadigmBook,
+  options: LearnOptions,
+): EditFactors | undefined {
+  return options.edits && learnEditFactors(lexicon.entries, book.paradigms, book.memberOf, options.ranker)
 }

@@ -68,8 +68,19 @@ export function corpusChangedLemmas(model: Model): number {
 export function modelFromInflection(learned: InflectionModel, opts: Partial<ModelOptions> = {}): Model {
   const options = { ...DEFAULT_MODEL_OPTIONS, ...opts }
   const inflection = roundModelWeights(learned, options.weightDecimals)
-  const kept = inflection.lexicon.entries.map((e) => (e.cells ? null : keepTables(inflection, e, options)))
-  return assembleModel(inflection, kept, options)
+  return assembleModel(inflection, keepAll(inflection, options), options)
+}
+
+/**
+ * The kept tables of every bare lemma of a rounded model (null for a table, and for an entry `pick` leaves out).
+ * @example keepAll(inflection, DEFAULT_MODEL_OPTIONS)[7] // [{ paradigm: 3, score: 0.91, cells: null }]
+ */
+export function keepAll(
+  inflection: InflectionModel,
+  options: ModelOptions,
+  pick: (e: LexEntry) => boolean = () => true,
+): (KeptTable[] | null)[] {
+  return inflection.lexicon.entries.map((e) => (e.cells || !pick(e) ? null : keepTables(inflection, e, options)))
 }
 
 /**
