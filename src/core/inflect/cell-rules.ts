@@ -13,7 +13,13 @@ import { type FeatureOptions, lemmaFeatures } from './features.ts'
 import type { Paradigm } from './paradigm.ts'
 import { fillPattern } from './pattern.ts'
 import { withPrior } from './prior.ts'
-import { type RankerExample, type RankerOptions, type RankerWeights, scoreCandidates } from './ranker.ts'
+import {
+  epochsFor,
+  type RankerExample,
+  type RankerOptions,
+  type RankerWeights,
+  scoreCandidates,
+} from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
 import { TrainMemo } from './ranker-train.ts'
 import { tiedClasses, withTwins } from './twins.ts'
@@ -141,7 +147,7 @@ export function learnCellRules(
           coder.add(example(copy, twin, mirroredOf[it.t]!))
         }
       }
-      const weights = memo.train(coder.done(), withPrior(ranker, coder.added, prior))
+      const weights = memo.train(coder.done(), epochsFor(withPrior(ranker, coder.added, prior), coder.added))
       if (classOf) weights.classOf = classOf
       const model = { upos, key, rules, weights, finder }
       modelOf.set(key, model)

@@ -68,6 +68,21 @@ export interface RankerOptions {
    * (at 1,000 npm German verb tables `gold` cost 0.4 table / 0.6 form points, at 5,000 it gained).
    */
   supportFrom?: number
+  /**
+   * A ranker trained on at least `fewerEpochsFrom` examples makes `largeEpochs` passes instead of `epochs`
+   * (absent: always `epochs`). Set for the cell rankers (learn.ts), where a large set's many updates per pass
+   * made 12 passes fit it too closely.
+   */
+  largeEpochs?: number
+  fewerEpochsFrom?: number
+}
+
+/**
+ * The options a ranker trains on `n` examples with (fewer passes over a large set, see `largeEpochs`).
+ * @example epochsFor({ ...DEFAULT_RANKER_OPTIONS, largeEpochs: 6, fewerEpochsFrom: 3000 }, 5000).epochs // 6
+ */
+export function epochsFor(o: RankerOptions, n: number): RankerOptions {
+  return o.largeEpochs !== undefined && n >= (o.fewerEpochsFrom ?? 0) ? { ...o, epochs: o.largeEpochs } : o
 }
 
 export const DEFAULT_RANKER_OPTIONS: RankerOptions = {
