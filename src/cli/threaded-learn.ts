@@ -63,11 +63,15 @@ export async function buildModelThreaded(
     const weights = trainTableRanker(lexicon, book, finder, alternations, learn)
     const edits = learnEdits(lexicon, book, learn)
     for (const w of workers) w.rankers({ weights, ...(edits && { edits }) })
+    // This thread's group, and every bare lemma of a UPOS without tables (no paradigm: no table kept).
     const mine = new Set(groups[0])
+    const elsewhere = new Set(groups.slice(1).flat())
     const base = { lexicon, book, alternations, weights, finder, options: learn, ...(edits && { edits }) }
     const own = learnCells(lexicon, alternations, learn, mine)
-    const kept = keepAll(roundModelWeights({ ...base, cells: own }, options.weightDecimals), options, (e) =>
-      mine.has(e.upos),
+    const kept = keepAll(
+      roundModelWeights({ ...base, cells: own }, options.weightDecimals),
+      options,
+      (e) => !elsewhere.has(e.upos),
     )
     const cellsOf = new Map(groups[0]!.map((u) => [u, own.filter((c) => c.upos === u)]))
     for (const w of workers) {

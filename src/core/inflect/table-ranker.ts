@@ -7,7 +7,7 @@ import { type ParadigmBook, reproducesWith } from './extract.ts'
 import { lemmaFeatures } from './features.ts'
 import type { LearnOptions } from './learn.ts'
 import { withPrior } from './prior.ts'
-import type { RankerExample, RankerWeights } from './ranker.ts'
+import { epochsFor, type RankerExample, type RankerWeights } from './ranker.ts'
 import { ExampleCoder } from './ranker-coding.ts'
 import { trainCoded } from './ranker-train.ts'
 import { tiedClasses } from './twins.ts'
@@ -60,7 +60,7 @@ export function trainTableRanker(
       if (consistent) coder.add(example(copy, twin!))
     }
   }
-  const weights = trainCoded(coder.done(), withPrior(options.ranker, coder.added, options.prior))
+  const weights = trainCoded(coder.done(), epochsFor(withPrior(options.ranker, coder.added, options.prior), coder.added))
   if (classOf) weights.classOf = classOf
   return weights
 }
