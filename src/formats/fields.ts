@@ -1,5 +1,5 @@
 // Field checks shared by the lexicon formats: non-empty words, UPOS tags, canonical FEATS.
-import { canonicalizeFeats, isUpos } from '../core/lexicon/feats.ts'
+import { canonicalizeFeats, type FeatsResult, isUpos } from '../core/lexicon/feats.ts'
 import type { Problem, ProblemCode } from '../core/lexicon/problem.ts'
 
 /** Where a line came from. */
@@ -72,6 +72,13 @@ export function checkUpos(upos: string, at: Where): Problem | undefined {
 }
 
 /**
+ * Bundles already canonicalized, so every row with the same FEATS shares one string: a dictionary of a million
+ * rows has a few hundred distinct bundles, and one string each keeps memory and later lookups small. Bounded.
+ */
+const FEATS_SEEN = new Map<string, FeatsResult>()
+const FEATS_SEEN_MAX = 10_000
+
+/**
  * Canonicalize a FEATS bundle, locating any problem at the line.
  * @example checkFeats('Number=Sing|Case=Nom', at) // { feats: 'Case=Nom|Number=Sing', languageSpecific: [] }
  */
@@ -79,7 +86,12 @@ export function checkFeats(
   raw: string,
   at: Where,
 ): { feats: string; languageSpecific: string[] } | { problem: Problem } {
-  const result = canonicalizeFeats(raw)
+  let result = FEATS_SEEN.get(raw)
+  if (!result) {
+    if (FEATS_SEEN.size >= FEATS_SEEN_MAX) FEATS_SEEN.clear()
+    result = canonicalizeFeats(raw)
+    FEATS_SEEN.set(raw, result)
+  }
   if (!result.ok) return { problem: { ...result.problem, file: at.file, line: at.line } }
   return { feats: result.feats, languageSpecific: result.languageSpecific }
 }

@@ -21,6 +21,18 @@ describe('readTableRows', () => {
     })
   })
 
+  it('gives every row with the same FEATS one string, and locates a repeated bad bundle at each line', async () => {
+    const text = 'vessa\tvessa\tNOUN\tNumber=Sing|Case=Nom\nkura\tkura\tNOUN\tNumber=Sing|Case=Nom\n'
+    const { rows } = await readTableRows(text, { file })
+    expect(rows.map((r) => r.feats)).toEqual(['Case=Nom|Number=Sing', 'Case=Nom|Number=Sing'])
+    const bad = 'vessa\tvessa\tNOUN\tCase\nkura\tkura\tNOUN\tCase\n'
+    const read = await readTableRows(bad, { file, skipBad: true })
+    expect(read.problems.map((p) => [p.code, p.line])).toEqual([
+      [read.problems[0]!.code, 1],
+      [read.problems[0]!.code, 2],
+    ])
+  })
+
   // UD v2 CoNLL-U format, FEATS column: features sorted alphabetically, case-insensitively ("Number"
   // before "NumType"), several values of one feature sorted and comma-joined, `_` for none.
   it.each([
