@@ -2,13 +2,17 @@
 // table rows, growth over sample fractions, and the model at the largest size (lemmas, forms, bytes, load time).
 // A seeded, evenly spread sample of the lemmas is used when all of them take too long (--lemmas N; 0 = all).
 // Every fifth sampled lemma becomes a lemma-only entry, so the model holds predicted tables too.
-// Learning runs as `formfold learn` does: on one thread per core (--jobs), parts of speech side by side.
+// Learning runs as `formfold learn` does: each size in a fresh process that reads a table-rows file (the timed
+// parse) and learns on one thread per core (--jobs), parts of speech side by side.
 // Run: npx tsx bench/scale-learn.ts -- [--lemmas 3000] [--fractions 0.1,0.3,1] [--jobs N] [--save MODEL.json[.gz]] [--json]
 // All lemmas (--lemmas 0) need a larger heap: node --max-old-space-size=16000 --import tsx bench/scale-learn.ts …
-import { writeFileSync } from 'node:fs'
-import { Readable } from 'node:stream'
+import { spawnSync } from 'node:child_process'
+import { createReadStream, mkdtempSync, rmSync, writeFileSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import { parseArgs } from 'node:util'
+import { getHeapStatistics } from 'node:v8'
 import { type Entry, rowsToEntries } from '../src/core/lexicon/entry.ts'
 import { decodeModel } from '../src/core/model/decode-model.ts'
 import { encodeModel } from '../src/core/model/encode-model.ts'
@@ -53,7 +57,9 @@ function tsvOf(entries: Entry[]): string {
 }
 
 /**
- * Parse the rows of `entries`' first `fraction`, then learn a model from them (spread evenly; 1 in 5 as lemma-only).
+ * Write the rows of `entries`' first `fraction` (spread evenly; 1 in 5 as lemma-only) to files, then parse and
+ * learn them in a fresh process, as `formfold learn` reads a file and learns: the process holds only what
+ * the command would, not this bench's copy of every entry.
  * @example (await measureLearn(sample(300), 1)).learnSeconds
  */
 export async function measureLearn(
@@ -65,15 +71,39 @@ export async function measureLearn(
   const count = Math.round(entries.length * fraction)
   const part = Array.from({ length: count }, (_, j) => entries[Math.floor(j / fraction)]!) // spread evenly
   const input = part.map((e, i): Entry => (i % 5 === 4 ? { lemma: e.lemma, upos: e.upos, feats: '_' } : e))
-  const tables = input.filter((e) => e.forms)
-  const text = tsvOf(tables)
-  await readLexicon(Readable.from([Buffer.from(text)]), { file: 'warm.tsv', format: 'rows' }) // warm-up
+  const dir = mkdtempSync(join(tmpdir(), 'formfold-scale-'))
+  try {
+    const rows = join(dir, 'tables.tsv')
+    const lemmas = join(dir, 'lemmas.tsv')
+    writeFileSync(rows, tsvOf(input.filter((e) => e.forms)))
+    writeFileSync(
+      lemmas,
+      input
+        .filter((e) => !e.forms)
+        .map((e) => `${e.lemma}\t${e.upos}\n`)
+        .join(''),
+    )
+    const heap = Math.ceil(getHeapStatistics().heap_size_limit / 2 ** 20)
+    const args = [`--max-old-space-size=${heap}`, '--import', 'tsx', fileURLToPath(import.meta.url)]
+    args.push('--point', rows, '--lemma-list', lemmas, '--jobs', String(jobs), '--fraction', String(fraction))
+    if (save) args.push('--save', save)
+    const run = spawnSync(process.execPath, args, { encoding: 'utf8', stdio: ['ignore', 'pipe', 'inherit'] })
+    if (run.status !== 0) throw new Error(`measuring ${fraction} of the sample failed (exit ${run.status})`)
+    return JSON.parse(run.stdout) as LearnPoint
+  } finally {
+    rmSync(dir, { recursive: true, force: true })
+  }
+}
+
+/** One point, in this process: parse the table rows file (timed; once before, to warm up), then learn. */
+async function learnPoint(rows: string, lemmas: string, fraction: number, jobs: number, save?: string) {
+  await readLexicon(createReadStream(rows), { file: rows, format: 'rows' }) // warm-up
+  const bare = (await readLexicon(createReadStream(lemmas), { file: lemmas, format: 'lemmas' })).entries
   let t = performance.now()
-  const read = await readLexicon(Readable.from([Buffer.from(text)]), { file: 'sample.tsv', format: 'rows' })
+  const read = await readLexicon(createReadStream(rows), { file: rows, format: 'rows' })
   const parseSeconds = (performance.now() - t) / 1000
-  const lemmaOnly = input.filter((e) => !e.forms)
   t = performance.now()
-  const model = await buildModelThreaded([...read.entries, ...lemmaOnly], {}, undefined, jobs)
+  const model = await buildModelThreaded([...read.entries, ...bare], {}, undefined, jobs)
   const learnSeconds = (performance.now() - t) / 1000
   const encoded = encodeModel(model)
   const packed = gzipModelText(encoded)
@@ -81,10 +111,10 @@ export async function measureLearn(
   t = performance.now()
   const decoded = decodeModel(encoded)
   const loadSeconds = (performance.now() - t) / 1000
-  return {
+  const point: LearnPoint = {
     fraction,
-    lemmas: input.length,
-    tables: tables.length,
+    lemmas: read.entries.length + bare.length,
+    tables: read.entries.length,
     rows: read.entries.reduce((n, e) => n + (e.forms?.length ?? 0), 0),
     parseSeconds,
     learnSeconds,
@@ -94,6 +124,7 @@ export async function measureLearn(
     loadSeconds,
     jobs,
   }
+  return point
 }
 
 /** Growth and learn/parse over the given fractions of a sample of `lemmas` German lemmas. */
@@ -131,8 +162,24 @@ if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
       json: { type: 'boolean', default: false },
       save: { type: 'string' },
       jobs: { type: 'string' },
+      // One point in a fresh process (measureLearn runs this).
+      point: { type: 'string' },
+      'lemma-list': { type: 'string' },
+      fraction: { type: 'string' },
     },
   })
+  if (values.point) {
+    const jobs = Number(values.jobs ?? defaultJobs())
+    const p = await learnPoint(
+      values.point,
+      values['lemma-list']!,
+      Number(values.fraction),
+      jobs,
+      values.save,
+    )
+    process.stdout.write(JSON.stringify(p))
+    process.exit(0)
+  }
   const jobs = values.jobs ? Number(values.jobs) : defaultJobs()
   const r = await measureGrowth(
     Number(values.lemmas),

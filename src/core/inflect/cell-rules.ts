@@ -1,7 +1,7 @@
 // Cell rules: for one cell, the lemma → form rewrite of every training table, grouped, and a ranker over them.
 // Factoring a table into its cells lets a lemma combine choices seen in different tables (a prefix from one
 // class, a stem change from another), as in the aligned edit rules of Durrett & DeNero (2013), NAACL.
-import type { Cell, Lexicon } from '../lexicon/lexicon.ts'
+import type { Cell, LexEntry, Lexicon } from '../lexicon/lexicon.ts'
 import { type Alternations, mirror, type TwinOptions } from './alternations.ts'
 import { CandidateFinder } from './candidates.ts'
 import { cellColumns, columnHash, sameColumn } from './cell-columns.ts'
@@ -33,6 +33,11 @@ export interface CellRuleModel {
   weights: RankerWeights
   /** Finds the candidate rules. Syncretic cells share it, and cells sharing it have the same rules and weights. */
   finder: CandidateFinder
+  /**
+   * Per rule seen in tables (the rules without `twinOf`, in order), its member tables in lexicon order, when
+   * known (learning and reading a model file know them): writing the model then need not cut every table again.
+   */
+  memberTables?: readonly (readonly LexEntry[])[]
 }
 
 /**
@@ -149,7 +154,9 @@ export function learnCellRules(
       }
       const weights = memo.train(coder.done(), epochsFor(withPrior(ranker, coder.added, prior), coder.added))
       if (classOf) weights.classOf = classOf
-      const model = { upos, key, rules, weights, finder }
+      const memberTables: LexEntry[][] = order.map(() => [])
+      own.forEach((r, i) => memberTables[r]!.push(tables[itemTable[i]!]!))
+      const model = { upos, key, rules, weights, finder, memberTables }
       modelOf.set(key, model)
       out.push(model)
     }
@@ -176,7 +183,14 @@ function relabel(m: CellRuleModel, key: string): CellRuleModel {
   }))
   const weights: RankerWeights = { local: m.weights.local, shared: m.weights.shared }
   if (m.weights.classOf) weights.classOf = [...m.weights.classOf]
-  return { upos: m.upos, key, rules, weights, finder: m.finder }
+  return {
+    upos: m.upos,
+    key,
+    rules,
+    weights,
+    finder: m.finder,
+    ...(m.memberTables && { memberTables: m.memberTables }),
+  }
 }
 
 /**

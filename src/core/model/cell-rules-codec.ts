@@ -40,8 +40,17 @@ export function encodeAllCellRules(
   const firstMembers = new Map<string, number>()
   // Cells that share a finder were learned as one (the same forms in every table): the same member lists.
   const membersOf = new Map<CellRuleModel['finder'], string>()
+  const numbers = entryNumbers(entries)
   return cells.map((c, i) => {
-    const json = encodeCellRules(c, entries, cellsOf(c.upos), decimals, names, membersOf.get(c.finder))
+    const json = encodeCellRules(
+      c,
+      entries,
+      cellsOf(c.upos),
+      decimals,
+      names,
+      membersOf.get(c.finder),
+      numbers,
+    )
     membersOf.set(c.finder, json.members as string)
     const w = JSON.stringify(json.weights)
     const at = firstWeights.get(w)
@@ -68,15 +77,19 @@ export function decodeAllCellRules(
 ): CellRuleModel[] {
   const decoded: RankerWeights[] = []
   // Cells with the same members share the lemma lists, so their candidate finders share suffix indexes.
-  const memberLists = new Map<string, string[][]>()
+  const memberLists = new Map<string, MemberLists>()
   const earlier = (v: number, i: number, what: string): CellRulesJson => {
     const target = list[v]
     if (!Number.isInteger(v) || v < 0 || v >= i || !target)
-      throw new ProblemError({ code: 'bad-model', message: `model file: cellRules[${i}].${what} refers to no earlier cell` })
+      throw new ProblemError({
+        code: 'bad-model',
+        message: `model file: cellRules[${i}].${what} refers to no earlier cell`,
+      })
     return target
   }
   return list.map((json, i) => {
-    const members = typeof json.members === 'number' ? earlier(json.members, i, 'members').members : json.members
+    const members =
+      typeof json.members === 'number' ? earlier(json.members, i, 'members').members : json.members
     let weights = json.weights
     let shared: RankerWeights | undefined
     if (typeof weights === 'number') {
@@ -85,7 +98,16 @@ export function decodeAllCellRules(
       shared = { local: w.local, shared: w.shared }
       weights = EMPTY
     }
-    const m = decodeCellRules({ ...json, members, weights }, entries, cellsOf(json.upos), alternations, twinOptions, featureNames, shared, memberLists)
+    const m = decodeCellRules(
+      { ...json, members, weights },
+      entries,
+      cellsOf(json.upos),
+      alternations,
+      twinOptions,
+      featureNames,
+      shared,
+      memberLists,
+    )
     decoded.push(m.weights)
     return m
   })
@@ -106,6 +128,7 @@ export function encodeCellRules(
   decimals: number,
   names?: ReadonlyMap<string, number>,
   members?: string,
+  numbers?: ReadonlyMap<LexEntry, number>,
 ): CellRulesJson {
   // Twin rules are not written: reading derives them again from the rules (see twins.ts).
   const seen = m.rules.filter((r) => r.twinOf === undefined)
@@ -115,24 +138,29 @@ export function encodeCellRules(
     cell: at >= 0 ? at : m.key,
     rules: seen.map((r) => encodeParadigm(r, cellKeys)),
     weights: encodeWeights(m.weights, decimals, names),
-    members: members ?? encodeMembers(m, seen, entries),
+    members: members ?? encodeMembers(m, seen, entries, numbers),
   }
 }
 
-/** The member tables of each rule, as ascending entry numbers, delta-coded (checked against the counts). */
-function encodeMembers(m: CellRuleModel, seen: readonly Paradigm[], entries: readonly LexEntry[]): string {
-  const shapeOf = new Map(seen.map((r, i) => [paradigmShapeKey(r.upos, r.lemma, r.openPrefix, r.cells), i]))
-  const members: number[][] = seen.map(() => [])
-  entries.forEach((e, i) => {
-    if (e.upos !== m.upos || !e.cells) return
-    const cell = e.cells.find((c) => c.key === m.key)
-    if (!cell) return
-    const tp = extractPattern(e.lemma, [cell.forms[0]!])
-    const r = shapeOf.get(
-      paradigmShapeKey(m.upos, tp.lemma, tp.openPrefix, [{ key: m.key, forms: [tp.forms[0]!] }]),
-    )
-    if (r !== undefined) members[r]!.push(i)
-  })
+/** Each entry's number in the list. */
+function entryNumbers(entries: readonly LexEntry[]): Map<LexEntry, number> {
+  const numbers = new Map<LexEntry, number>()
+  entries.forEach((e, i) => numbers.set(e, i))
+  return numbers
+}
+
+/**
+ * The member tables of each rule, as ascending entry numbers, delta-coded (checked against the counts): from
+ * the model's `memberTables` when it has them for these entries, else found again by cutting each table.
+ */
+function encodeMembers(
+  m: CellRuleModel,
+  seen: readonly Paradigm[],
+  entries: readonly LexEntry[],
+  numbers?: ReadonlyMap<LexEntry, number>,
+): string {
+  const known = m.memberTables && m.memberTables.length === seen.length ? m.memberTables : undefined
+  const members = (known && numbered(known, numbers ?? entryNumbers(entries))) ?? cutMembers(m, seen, entries)
   seen.forEach((r, i) => {
     if (members[i]!.length !== r.members) {
       throw new Error(`cell rule ${r.id}: found ${members[i]!.length} members, the rule says ${r.members}`)
@@ -150,6 +178,38 @@ function encodeMembers(m: CellRuleModel, seen: readonly Paradigm[], entries: rea
   return encode(ints)
 }
 
+/** The entry numbers of each rule's member tables; undefined when one of them is not among the entries. */
+function numbered(tables: readonly (readonly LexEntry[])[], numbers: ReadonlyMap<LexEntry, number>) {
+  const out: number[][] = []
+  for (const list of tables) {
+    const nums: number[] = []
+    for (const e of list) {
+      const n = numbers.get(e)
+      if (n === undefined) return undefined
+      nums.push(n)
+    }
+    out.push(nums)
+  }
+  return out
+}
+
+/** The members of each rule found again: the tables whose lemma → form rewrite in the cell has its shape. */
+function cutMembers(m: CellRuleModel, seen: readonly Paradigm[], entries: readonly LexEntry[]): number[][] {
+  const shapeOf = new Map(seen.map((r, i) => [paradigmShapeKey(r.upos, r.lemma, r.openPrefix, r.cells), i]))
+  const members: number[][] = seen.map(() => [])
+  entries.forEach((e, i) => {
+    if (e.upos !== m.upos || !e.cells) return
+    const cell = e.cells.find((c) => c.key === m.key)
+    if (!cell) return
+    const tp = extractPattern(e.lemma, [cell.forms[0]!])
+    const r = shapeOf.get(
+      paradigmShapeKey(m.upos, tp.lemma, tp.openPrefix, [{ key: m.key, forms: [tp.forms[0]!] }]),
+    )
+    if (r !== undefined) members[r]!.push(i)
+  })
+  return members
+}
+
 /**
  * Read one cell's rule ranker; its candidate finder is rebuilt from the rules and their member lemmas.
  * @example decodeCellRules(json, entries, cellKeys).finder.find('Mantel', 'NOUN').length // 3
@@ -162,16 +222,20 @@ export function decodeCellRules(
   twinOptions?: TwinOptions,
   featureNames?: readonly string[],
   sharedWeights?: RankerWeights,
-  memberLists?: Map<string, string[][]>,
+  memberLists?: Map<string, MemberLists>,
 ): CellRuleModel {
   const key = typeof json.cell === 'number' ? cellKeys[json.cell] : json.cell
   if (key === undefined)
     throw new ProblemError({ code: 'bad-model', message: `model file: no cell ${json.cell}` })
   const seen = json.rules.map((r) => decodeParadigm(r, cellKeys))
   if (typeof json.members !== 'string' || typeof json.weights === 'number')
-    throw new ProblemError({ code: 'bad-model', message: 'model file: a cell refers to another; read it with decodeAllCellRules' })
-  const lemmas = memberLists?.get(json.members) ?? memberLemmas(json.members, seen.length, entries)
-  memberLists?.set(json.members, lemmas)
+    throw new ProblemError({
+      code: 'bad-model',
+      message: 'model file: a cell refers to another; read it with decodeAllCellRules',
+    })
+  const tables = memberLists?.get(json.members) ?? memberEntries(json.members, seen.length, entries)
+  memberLists?.set(json.members, tables)
+  const lemmas = tables.lemmas
   const twinned = withTwins(seen, lemmas, alternations)
   const weights = sharedWeights ?? decodeWeights(json.weights, featureNames)
   if (twinOptions?.tie) weights.classOf = tiedClasses(twinned.paradigms, alternations)
@@ -181,23 +245,33 @@ export function decodeCellRules(
     rules: twinned.paradigms,
     weights,
     finder: new CandidateFinder(twinned.paradigms, twinned.members, alternations, twinOptions),
+    memberTables: tables.entries,
   }
 }
 
-/** The member lemmas of each of `n` rules, from a cell's `members` string. */
-function memberLemmas(members: string, n: number, entries: readonly LexEntry[]): string[][] {
+/** The member tables of each of `n` rules, and their lemmas, from a cell's `members` string. */
+function memberEntries(members: string, n: number, entries: readonly LexEntry[]): MemberLists {
   const ints = decode(members)
   let at = 0
-  return Array.from({ length: n }, () => {
+  const out: MemberLists = { entries: [], lemmas: [] }
+  for (let r = 0; r < n; r++) {
     const count = ints[at++]!
-    const list: string[] = []
+    const list: LexEntry[] = []
     let i = 0
     for (let k = 0; k < count; k++) {
       i += ints[at++]!
       const e = entries[i]
       if (!e) throw new ProblemError({ code: 'bad-model', message: `model file: no entry ${i}` })
-      list.push(e.lemma)
+      list.push(e)
     }
-    return list
-  })
+    out.entries.push(list)
+    out.lemmas.push(list.map((e) => e.lemma))
+  }
+  return out
+}
+
+/** Per rule, its member tables and their lemmas. */
+interface MemberLists {
+  entries: LexEntry[][]
+  lemmas: string[][]
 }

@@ -24,6 +24,16 @@ describe('shared parts of the model file', () => {
     expect([...back.inflection.weights.local].sort()).toEqual(before)
   })
 
+  it('writes the members of each rule from the tables learning grouped, as cutting every table again finds them', () => {
+    expect(model.inflection.cells.every((c) => c.memberTables)).toBe(true)
+    const cut = { ...model.inflection, cells: model.inflection.cells.map(({ memberTables: _, ...c }) => c) }
+    expect(encodeModel({ ...model, inflection: cut })).toBe(text)
+    // A model read from its file knows them too, so writing it again gives the same file.
+    const back = decodeModel(text)
+    expect(back.inflection.cells.every((c) => c.memberTables)).toBe(true)
+    expect(encodeModel(back)).toBe(text)
+  })
+
   it('writes a cell whose weights repeat an earlier cell as that cell, and reads both alike', () => {
     const refs = json.cellRules.flatMap((c: { weights: unknown }, i: number) =>
       typeof c.weights === 'number' ? [[i, c.weights]] : [],
@@ -33,10 +43,16 @@ describe('shared parts of the model file', () => {
     const back = decodeModel(text)
     for (const [i, j] of refs) {
       expect(j).toBeLessThan(i)
-      expect([...back.inflection.cells[i]!.weights.local].sort()).toEqual([...model.inflection.cells[i]!.weights.local].sort())
+      expect([...back.inflection.cells[i]!.weights.local].sort()).toEqual(
+        [...model.inflection.cells[i]!.weights.local].sort(),
+      )
       expect(back.inflection.cells[i]!.weights.local).toBe(back.inflection.cells[j]!.weights.local)
     }
-    for (const [lemma, upos] of [['Rose', 'NOUN'], ['trinken', 'VERB'], ['Kabel', 'NOUN']] as const)
+    for (const [lemma, upos] of [
+      ['Rose', 'NOUN'],
+      ['trinken', 'VERB'],
+      ['Kabel', 'NOUN'],
+    ] as const)
       expect(predictTables(back.inflection, lemma, upos, '_', 4)).toEqual(
         predictTables(model.inflection, lemma, upos, '_', 4),
       )
@@ -52,7 +68,9 @@ describe('shared parts of the model file', () => {
     let written = 0
     for (const i of mixed) {
       const slot = demoJson.entries[i][3] as unknown[][]
-      const diffs = slot.flatMap((t) => t.filter((x) => x && typeof x === 'object' && 'd' in x)) as { d: unknown[] }[]
+      const diffs = slot.flatMap((t) => t.filter((x) => x && typeof x === 'object' && 'd' in x)) as {
+        d: unknown[]
+      }[]
       const cells = demo.kept[i]!.find((t) => t.cells)!.cells!
       // Only the differing cells are written: fewer than the table has.
       for (const d of diffs) expect(d.d.length).toBeLessThan(cells.length)
