@@ -22,30 +22,68 @@ export interface CodedExamples {
   sharedNames: string[]
 }
 
-/** A growable Int32Array. */
+/**
+ * Buffers of finished lists, for later lists to grow into. A typed array's memory lies outside the JS heap, and
+ * V8 answers every 64 MB or so of such memory allocated with a full collection of the whole heap: coding a
+ * large cell's examples afresh each time (growing by doubling, then copying out) made a dictionary-sized
+ * learning spend a third of its cell-ranker time in those collections. Bounded; contents never matter.
+ */
+const SPARE: Int32Array[] = []
+const SPARE_MAX = 16
+
+export function spareBuffer(minLength: number): Int32Array {
+  let best = -1
+  for (let i = 0; i < SPARE.length; i++)
+    if (SPARE[i]!.length >= minLength && (best < 0 || SPARE[i]!.length < SPARE[best]!.length)) best = i
+  if (best < 0) return new Int32Array(Math.max(minLength, 1024))
+  const b = SPARE[best]!
+  SPARE[best] = SPARE[SPARE.length - 1]!
+  SPARE.pop()
+  return b
+}
+
+export function giveBack(b: Int32Array): void {
+  if (b.length < 1024) return
+  if (SPARE.length < SPARE_MAX) {
+    SPARE.push(b)
+    return
+  }
+  let small = 0
+  for (let i = 1; i < SPARE.length; i++) if (SPARE[i]!.length < SPARE[small]!.length) small = i
+  if (SPARE[small]!.length < b.length) SPARE[small] = b
+}
+
+/** A growable Int32Array, grown into spare buffers and giving its own back when done. */
 class IntList {
-  data = new Int32Array(1024)
+  data = spareBuffer(1024)
   length = 0
   push(v: number): void {
     if (this.length === this.data.length) {
-      const next = new Int32Array(this.data.length * 2)
+      const next = spareBuffer(this.data.length * 2)
       next.set(this.data)
+      giveBack(this.data)
       this.data = next
     }
     this.data[this.length++] = v
   }
+  /** The values, copied out; the list is not to be used after. */
   done(): Int32Array {
-    return this.data.slice(0, this.length)
+    const out = this.data.slice(0, this.length)
+    giveBack(this.data)
+    this.data = EMPTY
+    return out
   }
 }
+
+const EMPTY = new Int32Array(0)
 
 /**
  * (feature id, class) → weight slot, by open addressing (a Map keyed by a combined number is far slower);
  * each entry's feature, class and slot lie side by side, so a probe touches one cache line.
  */
 class PairSlots {
-  /** Entry h at 3h: feature (-1: empty), class, slot. */
-  private table = new Int32Array(3 << 12).fill(-1)
+  /** Entry h at 3h: feature (-1: empty), class, slot (a spare buffer may be longer: only 3 << bits are used). */
+  private table = spareBuffer(3 << 12).fill(-1, 0, 3 << 12)
   private bits = 12
   readonly feature = new IntList()
   readonly cls = new IntList()
@@ -79,9 +117,16 @@ class PairSlots {
     t[3 * h + 2] = s
   }
 
+  /** Give the table back (see SPARE); the slots are not to be used after. */
+  release(): void {
+    giveBack(this.table)
+    this.table = EMPTY
+  }
+
   private grow(): void {
     this.bits++
-    this.table = new Int32Array(3 << this.bits).fill(-1)
+    giveBack(this.table)
+    this.table = spareBuffer(3 << this.bits).fill(-1, 0, 3 << this.bits)
     for (let s = 0; s < this.feature.length - 1; s++) this.put(this.feature.data[s]!, this.cls.data[s]!, s)
   }
 }
@@ -137,7 +182,7 @@ export class ExampleCoder {
   done(): CodedExamples {
     this.start.push(this.candStart.length)
     this.candStart.push(this.ids.length)
-    return {
+    const coded: CodedExamples = {
       start: this.start.done(),
       width: this.width.done(),
       candStart: this.candStart.done(),
@@ -150,6 +195,8 @@ export class ExampleCoder {
       localNames: [...this.localIds.keys()],
       sharedNames: [...this.sharedIds.keys()],
     }
+    this.pairs.release()
+    return coded
   }
 }
 

@@ -1,7 +1,7 @@
 // Training the log-linear ranker (ranker.ts): examples coded once into flat typed arrays, then AdaGrad
 // epochs over them in a seeded order (Duchi, Hazan & Singer 2011, JMLR), so runs are identical.
 import { mulberry32, type RankerExample, type RankerOptions, type RankerWeights } from './ranker.ts'
-import { type CodedExamples, ExampleCoder } from './ranker-coding.ts'
+import { type CodedExamples, ExampleCoder, giveBack, spareBuffer } from './ranker-coding.ts'
 
 /**
  * Train the ranker; examples are visited in a seeded shuffled order, so runs are identical. Weights are kept
@@ -23,14 +23,14 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
   const count = c.start.length - 1
   // Each weight lies beside its squared-gradient sum (weight at 2k, sum at 2k + 1): an update reads one cache
   // line, not two. The local pair slots come first, then the shared features (see trainable).
-  const w = new Float64Array(2 * (c.pairCount + c.sharedNames.length))
+  const w = weightScratch(2 * (c.pairCount + c.sharedNames.length))
   const rand = mulberry32(opts.seed)
   const order = Array.from({ length: count }, (_, i) => i)
   const { rate, l2 } = opts
   const { start, gold } = c
   // Slots outside the supported set (see RankerOptions.support) stay 0: never updated, never written, so they
   // are left out of the candidates' slot lists (adding a zero weight changes no score).
-  const { candStart, ids } = trainable(c, supportedSlots(c, opts, count))
+  const { candStart, ids, buffers } = trainable(c, supportedSlots(c, opts, count))
   const scores = new Float64Array(c.maxCandidates)
   const p = new Float64Array(c.maxCandidates)
   for (let epoch = 0; epoch < opts.epochs; epoch++) {
@@ -79,6 +79,7 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
       }
     }
   }
+  for (const b of buffers) giveBack(b)
   const out: RankerWeights = { local: new Map(), shared: new Map() }
   const prune = count >= (opts.pruneFrom ?? 0) ? (opts.prune ?? 0) : 0
   const { pairFeature, pairClass, localNames } = c
@@ -93,15 +94,27 @@ export function trainCoded(c: CodedExamples, opts: RankerOptions): RankerWeights
   return out
 }
 
+/** The weights under training, in one buffer reused by every training (zeroed; see SPARE in ranker-coding.ts). */
+let weightBuffer = new Float64Array(1024)
+
+function weightScratch(n: number): Float64Array {
+  if (weightBuffer.length < n) weightBuffer = new Float64Array(Math.max(n, 2 * weightBuffer.length))
+  return weightBuffer.subarray(0, n).fill(0)
+}
+
 /**
  * The candidates' id lists as positions in the interleaved weight array, with the slots that may not learn
  * left out: candidate c's ids are ids[candStart[c]] up to candStart[c + 1], its local weight slots first
  * (slot s at 2s), then its shared features (feature f at 2 (pairCount + f)). Without a mask every local slot.
+ * They lie in spare buffers (`buffers`, to be given back after training; see ranker-coding.ts).
  */
-function trainable(c: CodedExamples, allowed: Uint8Array | null): { candStart: Int32Array; ids: Int32Array } {
+function trainable(
+  c: CodedExamples,
+  allowed: Uint8Array | null,
+): { candStart: Int32Array; ids: Int32Array; buffers: Int32Array[] } {
   const cands = c.candStart.length - 1
-  const candStart = new Int32Array(cands + 1)
-  const ids = new Int32Array(c.ids.length)
+  const candStart = spareBuffer(cands + 1)
+  const ids = spareBuffer(c.ids.length)
   const sharedAt = 2 * c.pairCount
   const examples = c.start.length - 1
   let at = 0
@@ -119,7 +132,7 @@ function trainable(c: CodedExamples, allowed: Uint8Array | null): { candStart: I
     }
   }
   candStart[cands] = at
-  return { candStart, ids: ids.subarray(0, at) }
+  return { candStart, ids: ids.subarray(0, at), buffers: [candStart, ids] }
 }
 
 /**
