@@ -47,19 +47,32 @@ export async function buildModelThreaded(
 ): Promise<Model> {
   if (corpus || jobs < 2) return buildModel(entries, opts, corpus)
   const options = { ...DEFAULT_MODEL_OPTIONS, ...opts }
-  const lexicon = buildLexicon(entries)
-  const groups = planGroups(lexicon, jobs)
-  const tables = lexicon.entries.reduce((n, e) => n + (e.cells ? 1 : 0), 0)
-  if (groups.length < 2 || tables < fromTables)
-    return modelFromInflection(learnFromLexicon(lexicon, options.learn), options)
-  const learn = options.learn
-  const start = startLearning(lexicon, learn)
-  const { book, finder, members } = twinBook(lexicon, start, learn)
-  const { alternations } = start
-  const workers = groups
-    .slice(1)
-    .map((g) => new GroupWorker(lexicon, new Set(g), book, members, alternations, options))
+  // Threads load their code (about a second or two) while this one builds the lexicon and the book: started
+  // now when the entries are surely enough to use them, and stopped unused if the split needs fewer.
+  const list = Array.isArray(entries) ? (entries as Entry[]) : [...entries]
+  const spawned: GroupWorker[] = []
+  const spawn = () => {
+    const w = new GroupWorker(options)
+    spawned.push(w)
+    return w
+  }
   try {
+    if (list.length >= fromTables) for (let k = 1; k < jobs; k++) spawn()
+    const lexicon = buildLexicon(list)
+    const groups = planGroups(lexicon, jobs)
+    const tables = lexicon.entries.reduce((n, e) => n + (e.cells ? 1 : 0), 0)
+    if (groups.length < 2 || tables < fromTables)
+      return modelFromInflection(learnFromLexicon(lexicon, options.learn), options)
+    const workers = spawned.slice(0, groups.length - 1)
+    for (const w of spawned.slice(workers.length)) void w.worker.terminate()
+    const learn = options.learn
+    const start = startLearning(lexicon, learn)
+    const { book, finder, members } = twinBook(lexicon, start, learn)
+    const { alternations } = start
+    for (let k = 0; k < groups.length - 1; k++) {
+      workers[k] ??= spawn()
+      workers[k]!.start(lexicon, new Set(groups[k + 1]), book, members, alternations)
+    }
     const weights = trainTableRanker(lexicon, book, finder, alternations, learn)
     const edits = learnEdits(lexicon, book, learn)
     for (const w of workers) w.rankers({ weights, ...(edits && { edits }) })
@@ -97,7 +110,7 @@ export async function buildModelThreaded(
     const inflection = roundModelWeights({ ...base, cells }, options.weightDecimals)
     return assembleModel(inflection, kept, options)
   } finally {
-    for (const w of workers) void w.worker.terminate()
+    for (const w of spawned) void w.worker.terminate()
   }
 }
 
@@ -125,24 +138,13 @@ export function planGroups(lexicon: Lexicon, jobs: number): string[][] {
 /** One worker thread learning the cells and predicted tables of a group of UPOS tags. */
 class GroupWorker {
   readonly worker: Worker
-  /** The group's entries in lexicon order, and the lexicon number of each. */
+  /** The group's tags, its entries in lexicon order, and the lexicon number of each (set by `start`). */
+  upos: ReadonlySet<string> = new Set()
   readonly entries: LexEntry[] = []
   readonly index: number[] = []
   readonly result: Promise<WorkerDone>
 
-  constructor(
-    lexicon: Lexicon,
-    readonly upos: ReadonlySet<string>,
-    book: WorkerStart['book'],
-    members: string[][],
-    alternations: WorkerStart['alternations'],
-    options: ModelOptions,
-  ) {
-    lexicon.entries.forEach((e, i) => {
-      if (!upos.has(e.upos)) return
-      this.entries.push(e)
-      this.index.push(i)
-    })
+  constructor(private readonly options: ModelOptions) {
     const limit = Math.ceil(getHeapStatistics().heap_size_limit / 2 ** 20)
     this.worker = new Worker(new URL('./learn-worker.mjs', import.meta.url), {
       resourceLimits: { maxOldGenerationSizeMb: limit },
@@ -155,6 +157,22 @@ class GroupWorker {
       this.worker.once('exit', (code) => reject(new Error(`learning thread stopped (exit code ${code})`)))
     })
     this.result.catch(() => {}) // awaited in turn; an early failure is not unhandled meanwhile
+  }
+
+  /** Give the thread its group and the shared start: it learns the group's cell rankers. */
+  start(
+    lexicon: Lexicon,
+    upos: ReadonlySet<string>,
+    book: WorkerStart['book'],
+    members: string[][],
+    alternations: WorkerStart['alternations'],
+  ): void {
+    this.upos = upos
+    lexicon.entries.forEach((e, i) => {
+      if (!upos.has(e.upos)) return
+      this.entries.push(e)
+      this.index.push(i)
+    })
     const cellKeys = Object.fromEntries([...upos].map((u) => [u, lexicon.cellKeys[u]!]))
     const start: WorkerStart = {
       packed: packEntries(this.entries),
@@ -163,7 +181,7 @@ class GroupWorker {
       book: { paradigms: book.paradigms, memberOf: this.index.map((i) => book.memberOf[i]!) },
       members,
       alternations,
-      options,
+      options: this.options,
     }
     this.worker.postMessage(start)
   }
