@@ -31,6 +31,7 @@ export interface CodedExamples {
 const SPARE: Int32Array[] = []
 const SPARE_MAX = 16
 
+/** A buffer of at least `minLength` (a spare one when there is one; its contents are arbitrary). */
 export function spareBuffer(minLength: number): Int32Array {
   let best = -1
   for (let i = 0; i < SPARE.length; i++)
@@ -42,6 +43,7 @@ export function spareBuffer(minLength: number): Int32Array {
   return b
 }
 
+/** Return a buffer no longer used, for a later list (the pool keeps the largest 16). */
 export function giveBack(b: Int32Array): void {
   if (b.length < 1024) return
   if (SPARE.length < SPARE_MAX) {
