@@ -178,14 +178,17 @@ function encodeMembers(
   return encode(ints)
 }
 
-/** The entry numbers of each rule's member tables; undefined when one of them is not among the entries. */
+/**
+ * The entry numbers of each rule's member tables; undefined when one of them is not among the entries, or they
+ * are not in the entries' order (the delta coding needs them ascending).
+ */
 function numbered(tables: readonly (readonly LexEntry[])[], numbers: ReadonlyMap<LexEntry, number>) {
   const out: number[][] = []
   for (const list of tables) {
     const nums: number[] = []
     for (const e of list) {
       const n = numbers.get(e)
-      if (n === undefined) return undefined
+      if (n === undefined || n <= (nums.at(-1) ?? -1)) return undefined
       nums.push(n)
     }
     out.push(nums)
