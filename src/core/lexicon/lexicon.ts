@@ -52,14 +52,31 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
     }
     return m
   }
-  const memo = new Map<string, string>()
-  const cached = (key: string, make: () => string): string => {
-    let v = memo.get(key)
+  // Two levels (a context, then a row's bundle): the bundles are the reader's shared strings, so a lookup
+  // hashes nothing new, where one joined key per row would be a new string to hash.
+  const memo = new Map<string, Map<string, string>>()
+  const cached = (context: string, feats: string, make: () => string): string => {
+    let inner = memo.get(context)
+    if (!inner) {
+      inner = new Map()
+      memo.set(context, inner)
+    }
+    let v = inner.get(feats)
     if (v === undefined) {
       v = make()
-      memo.set(key, v)
+      inner.set(feats, v)
     }
     return v
+  }
+  // Each bundle's feature names, listed once.
+  const namesOf = new Map<string, string[]>()
+  const names = (f: string): string[] => {
+    let n = namesOf.get(f)
+    if (!n) {
+      n = Object.keys(parse(f))
+      namesOf.set(f, n)
+    }
+    return n
   }
   const merged = new Map<string, { entry: Entry; rows: { form: string; feats: string }[]; tables: number }>()
   for (const e of input) {
@@ -87,7 +104,7 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
         feats:
           e.feats === '_'
             ? mergeFeats(e.feats, f.feats)
-            : cached(`m\u0000${e.feats}\u0000${f.feats}`, () => mergeFeats(e.feats, f.feats)),
+            : cached(`m\u0000${e.feats}`, f.feats, () => mergeFeats(e.feats, f.feats)),
       }))
       if (m.tables > 0 && e.line !== undefined && !sameRows(m.rows, full)) {
         problems.push({
@@ -108,16 +125,21 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
     if (rows.length === 0) continue
     const set = varying.get(entry.upos) ?? new Set<string>()
     varying.set(entry.upos, set)
-    const maps = rows.map((r) => parse(r.feats))
-    const names = new Set(maps.flatMap((m) => Object.keys(m)))
-    for (const n of names) {
-      const first = maps[0]![n]
-      if (maps.some((m) => !sameValues(m[n], first))) set.add(n)
+    // A name varies when some row's value differs from the first row's (absent counts as a value); rows
+    // with the first row's bundle cannot differ, and a name known to vary needs no more looking.
+    const first = rows[0]!.feats
+    const firstMap = parse(first)
+    for (const r of rows) {
+      if (r.feats === first) continue
+      const m = parse(r.feats)
+      for (const n of names(r.feats)) if (!set.has(n) && !sameValues(m[n], firstMap[n])) set.add(n)
+      for (const n of names(first)) if (!set.has(n) && !sameValues(m[n], firstMap[n])) set.add(n)
     }
   }
 
   const entries: LexEntry[] = []
   const cellKeys: Record<string, string[]> = {}
+  const keySets = new Map<string, Set<string>>()
   for (const { entry, rows } of merged.values()) {
     const infl = varying.get(entry.upos) ?? new Set<string>()
     if (rows.length === 0) {
@@ -136,8 +158,13 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
     const cells: Cell[] = []
     const index = new Map<string, Cell>()
     const keys = (cellKeys[entry.upos] ??= [])
+    let known = keySets.get(entry.upos)
+    if (!known) {
+      known = new Set()
+      keySets.set(entry.upos, known)
+    }
     for (const r of rows) {
-      const key = cached(keySig + r.feats, () => {
+      const key = cached(keySig, r.feats, () => {
         const keep = new Set(Object.keys(parse(r.feats)).filter((n) => !inherentNames.has(n) || infl.has(n)))
         return pickFeats(r.feats, keep)
       })
@@ -146,7 +173,10 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
         cell = { key, forms: [] }
         index.set(key, cell)
         cells.push(cell)
-        if (!keys.includes(key)) keys.push(key)
+        if (!known.has(key)) {
+          known.add(key)
+          keys.push(key)
+        }
       }
       if (!cell.forms.includes(r.form)) cell.forms.push(r.form)
     }
@@ -155,8 +185,18 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
   // Canonical order, so the order of input rows never changes a model: entries by UPOS then lemma (code
   // points), cells by their FEATS (UD order); variant forms keep the source's order (its preference).
   entries.sort((a, b) => cmp(a.upos, b.upos) || cmp(a.lemma, b.lemma))
-  for (const e of entries) e.cells?.sort((a, b) => compareFeatureKeys(a.key, b.key))
-  for (const upos of Object.keys(cellKeys)) cellKeys[upos]!.sort(compareFeatureKeys)
+  // Each UPOS's cell keys are sorted once; a table's cells then sort by their key's place there (the same
+  // order: compareFeatureKeys is total, and a table has each key once).
+  const ranks = new Map<string, Map<string, number>>()
+  for (const upos of Object.keys(cellKeys)) {
+    cellKeys[upos]!.sort(compareFeatureKeys)
+    ranks.set(upos, new Map(cellKeys[upos]!.map((k, i) => [k, i])))
+  }
+  for (const e of entries) {
+    if (!e.cells || e.cells.length < 2) continue
+    const rank = ranks.get(e.upos)!
+    e.cells.sort((a, b) => rank.get(a.key)! - rank.get(b.key)!)
+  }
   const sortedCellKeys: Record<string, string[]> = {}
   for (const upos of Object.keys(cellKeys).sort(cmp)) sortedCellKeys[upos] = cellKeys[upos]!
   const inflectional: Record<string, string[]> = {}
