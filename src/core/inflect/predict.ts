@@ -162,7 +162,8 @@ function cellDistributions(model: InflectionModel, lemma: string, upos: string, 
   for (const m of model.cells) {
     if (m.upos !== upos) continue
     const known = byFinder.get(m.finder)
-    const d = known ? new Map(known) : cellFormDistribution(m, lemma, inherent, model.options.features, local, edit)
+    // Shared, not copied: nothing changes a distribution once made.
+    const d = known ?? cellFormDistribution(m, lemma, inherent, model.options.features, local, edit)
     if (!known) byFinder.set(m.finder, d)
     if (d.size > 0) dists.set(m.key, d)
   }

@@ -83,11 +83,30 @@ export class SuffixIndex {
     let wholeMember = false
     // The excluded member shares the path while its letters from the end are the word's.
     let onPath = out !== null
+    const text = this.text
+    const start = this.start
     for (let i = chars.length - 1; i >= 0; i--) {
       const d = chars.length - 1 - i
       const c = chars[i]!
-      const a = this.lowerBound(lo, hi, d, c)
-      const b = this.lowerBound(a, hi, d, c + 1)
+      // lowerBound(lo, hi, d, c) and lowerBound(a, hi, d, c + 1), written out: this is the inner loop of
+      // every candidate search.
+      let x = lo
+      let y = hi
+      while (x < y) {
+        const m = (x + y) >> 1
+        const at = start[m]! + d
+        if ((at < start[m + 1]! ? text[at]! : -1) < c) x = m + 1
+        else y = m
+      }
+      const a = x
+      y = hi
+      while (x < y) {
+        const m = (x + y) >> 1
+        const at = start[m]! + d
+        if ((at < start[m + 1]! ? text[at]! : -1) <= c) x = m + 1
+        else y = m
+      }
+      const b = x
       if (a === b) break
       onPath = onPath && d < out!.length && out![out!.length - 1 - d] === c
       const n = b - a - (onPath ? 1 : 0)
