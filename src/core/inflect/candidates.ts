@@ -30,6 +30,23 @@ function suffixIndexOf(members: readonly string[]): SuffixIndex {
   return idx
 }
 
+/** What SuffixIndex.longestSharedCodes found for the lemma last asked about, per index (indexes are shared). */
+let suffixWord = ''
+const suffixFound = new Map<SuffixIndex, ReturnType<SuffixIndex['longestSharedCodes']>>()
+
+function sharedSuffix(idx: SuffixIndex, lemma: string, codes: readonly number[]) {
+  if (lemma !== suffixWord) {
+    suffixFound.clear()
+    suffixWord = lemma
+  }
+  let r = suffixFound.get(idx)
+  if (!r) {
+    r = idx.longestSharedCodes(codes, false)
+    suffixFound.set(idx, r)
+  }
+  return r
+}
+
 /** Paradigms of one book, indexed for fast candidate search and analogy features. */
 export class CandidateFinder {
   private readonly byUpos = new Map<string, number[]>()
@@ -177,7 +194,10 @@ export class CandidateFinder {
       const fit = fitOfMatch(stems, v)
       const excluded = skip.get(i)
       const leave = excluded === undefined ? false : excluded === lower ? true : codePoints(excluded)
-      const sfx = this.suffixes[i]!.longestSharedCodes(codes, leave)
+      const sfx =
+        leave === false
+          ? sharedSuffix(this.suffixes[i]!, lemma, codes)
+          : this.suffixes[i]!.longestSharedCodes(codes, leave)
       const shared = this.sharedFeatures(v, i, sfx, stems, fit, excluded !== undefined)
       this.sideFeatures(i, lower, cls, shared)
       // Word-initial choices (a participle prefix or not) pooled across paradigms, tied to the lemma's start.

@@ -77,6 +77,16 @@ export function learnCellRules(
     })
     const wanted = keys.flatMap((key, ki) => (learnedAs[ki] === key ? [ki] : []))
     const grouped: (CellGroups | undefined)[] = groupCells(upos, tables, columns, keys, wanted)
+    // Rules of cells that split the tables alike have the same member lemmas: one list for them all, so
+    // their finders share one suffix index (and a lemma's search through it, see CandidateFinder.find).
+    const lists = new Map<string, string[]>()
+    const oneList = (members: string[]) => {
+      const key = members.join('\u0000')
+      const known = lists.get(key)
+      if (known) return known
+      lists.set(key, members)
+      return members
+    }
     const modelOf = new Map<string, CellRuleModel>()
     for (const [ki, key] of keys.entries()) {
       const alike = modelOf.get(learnedAs[ki]!)
@@ -109,7 +119,7 @@ export function learnCellRules(
         alternations,
       )
       const rules = twinned.paradigms
-      const finder = new CandidateFinder(rules, twinned.members, alternations, twinOptions)
+      const finder = new CandidateFinder(rules, twinned.members.map(oneList), alternations, twinOptions)
       const classOf = twinOptions?.tie ? tiedClasses(rules, alternations) : undefined
       const picked = sampleByClass(own, cellCap(ranker, order.length), ranker.seed)
       const coder = new ExampleCoder()

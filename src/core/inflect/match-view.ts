@@ -26,6 +26,8 @@ export interface MatchView {
   twinOf: number
   /** When the lemma pattern is one stem between two literals (either may be ''), they: matchSingle's case. */
   single: { before: string; after: string } | null
+  /** The lemma pattern and open prefix as one string: views with the same key match a lemma the same ways. */
+  key: string
 }
 
 /**
@@ -42,6 +44,7 @@ export function matchView(p: Paradigm): MatchView {
     members: p.members,
     twinOf: p.twinOf ?? -1,
     single: singleStem(p.lemma),
+    key: `${p.openPrefix ? 'o' : 'c'}${JSON.stringify(p.lemma)}`,
   }
 }
 
@@ -92,8 +95,10 @@ export function viewFit(stems: readonly string[], v: MatchView): number {
 
 /**
  * The stem contents of a lemma under a paradigm (the best-fitting match), or null: matchStems on a view.
- * The ways to match are searched as matchAll does, in its order and up to its bound, but each is scored
- * by its stem bounds as it is found, and only the best is cut out of the lemma.
+ * The ways to match are searched as matchAll does, in its order and up to its bound; the first of those
+ * that fit best (viewFit, by stem bounds) is cut out of the lemma. The ways depend only on the lemma pattern,
+ * so they are found once per lemma and pattern (cell rules of many cells share patterns) and only scored
+ * per view.
  * @example viewStems(matchView(p), 'Mantel') // ['Mant', 'l']
  */
 export function viewStems(v: MatchView, lemma: string): string[] | null {
@@ -107,21 +112,28 @@ export function viewStems(v: MatchView, lemma: string): string[] | null {
     if (end < lemma.length && isHighSurrogate(lemma.charCodeAt(end - 1))) return null
     return [lemma.slice(before.length, end)]
   }
-  const s = search
-  s.view = v
-  s.word = lemma
-  s.found = 0
-  beginSearch(s, v.lemma, lemma.length)
-  if (s.vars > s.bestFrom.length) {
-    s.bestFrom = new Int32Array(2 * s.vars)
-    s.bestTo = new Int32Array(2 * s.vars)
+  const m = matchesOf(v, lemma)
+  if (m.count === 0) return null
+  const vars = m.vars
+  const spans = m.spans
+  let best = 0
+  let bestFit = 0
+  const shapes = v.shapes
+  if (shapes) {
+    for (let k = 0; k < m.count; k++) {
+      const fit = spanFit(shapes, lemma, spans, k * vars, vars)
+      if (k === 0 || fit > bestFit) {
+        best = k
+        bestFit = fit
+      }
+    }
   }
-  step(s, 0, 0)
-  s.word = ''
-  if (s.found === 0) return null
-  lastFit = s.bestFit
+  lastFit = bestFit
   const stems: string[] = []
-  for (let i = 0; i < s.vars; i++) stems.push(lemma.slice(s.bestFrom[i]!, s.bestTo[i]!))
+  for (let i = 0; i < vars; i++) {
+    const at = 2 * (best * vars + i)
+    stems.push(lemma.slice(spans[at]!, spans[at + 1]!))
+  }
   return stems
 }
 
@@ -136,17 +148,49 @@ export function fitOfMatch(stems: readonly string[], v: MatchView): number {
   return lastFit >= 0 ? lastFit : viewFit(stems, v)
 }
 
-/** The state of one viewStems search, reused (matching is synchronous); `dead` as in paradigm.ts. */
+/** The ways one lemma matches one lemma pattern: `count` matches of `vars` (from, to) spans, end to end. */
+interface Matches {
+  count: number
+  vars: number
+  spans: number[]
+}
+
+/** The matches of the lemma last asked about, by pattern key (a candidate search asks about one lemma). */
+let matchedWord = ''
+const matchesByKey = new Map<string, Matches>()
+
+function matchesOf(v: MatchView, lemma: string): Matches {
+  if (lemma !== matchedWord) {
+    matchesByKey.clear()
+    matchedWord = lemma
+  }
+  let m = matchesByKey.get(v.key)
+  if (!m) {
+    const s = search
+    s.view = v
+    s.word = lemma
+    s.found = 0
+    beginSearch(s, v.lemma, lemma.length)
+    s.spans = []
+    step(s, 0, 0)
+    m = { count: s.found, vars: s.vars, spans: s.spans }
+    s.word = ''
+    s.spans = []
+    matchesByKey.set(v.key, m)
+  }
+  return m
+}
+
+/** The state of one search, reused (matching is synchronous); `dead` as in paradigm.ts. */
 const search = {
   view: null as unknown as MatchView,
   word: '',
   found: 0,
   vars: 0,
-  bestFit: 0,
   from: new Int32Array(8),
   to: new Int32Array(8),
-  bestFrom: new Int32Array(8),
-  bestTo: new Int32Array(8),
+  /** The complete matches found, as Matches.spans. */
+  spans: [] as number[],
   dead: new Int32Array(256),
   call: 0,
 }
@@ -200,32 +244,33 @@ function step(s: typeof search, part: number, pos: number): void {
   if (s.found === before) s.dead[state] = s.call
 }
 
-/** A complete match: kept when it is the first or fits better than the best so far (viewFit, by bounds). */
+/** A complete match: its spans recorded. */
 function found(s: typeof search): void {
-  const shapes = s.view.shapes
-  let fit = 0
-  if (shapes) {
-    const word = s.word
-    for (let i = 0; i < s.vars; i++) {
-      const sh = shapes[i]
-      if (!sh) continue
-      const a = s.from[i]!
-      const b = s.to[i]!
-      const len = b - a
-      if (len >= 2 && seenAt(sh.seenByLength[len], word, a)) fit += 3
-      if (len >= sh.minLength && len <= sh.maxLength) fit += 1
-      if (len > 0 && sh.first.includes(word[a]!)) fit += 1
-      if (len > 0 && sh.last.includes(word[b - 1]!)) fit += 1
-    }
-  }
-  if (s.found === 0 || fit > s.bestFit) {
-    s.bestFit = fit
-    for (let i = 0; i < s.vars; i++) {
-      s.bestFrom[i] = s.from[i]!
-      s.bestTo[i] = s.to[i]!
-    }
-  }
+  for (let i = 0; i < s.vars; i++) s.spans.push(s.from[i]!, s.to[i]!)
   s.found++
+}
+
+/** viewFit of match k's stems (spans from `at`), by their bounds in `word` (no substring made). */
+function spanFit(
+  shapes: readonly ShapeView[],
+  word: string,
+  spans: readonly number[],
+  at: number,
+  vars: number,
+): number {
+  let fit = 0
+  for (let i = 0; i < vars; i++) {
+    const sh = shapes[i]
+    if (!sh) continue
+    const a = spans[2 * (at + i)]!
+    const b = spans[2 * (at + i) + 1]!
+    const len = b - a
+    if (len >= 2 && seenAt(sh.seenByLength[len], word, a)) fit += 3
+    if (len >= sh.minLength && len <= sh.maxLength) fit += 1
+    if (len > 0 && sh.first.includes(word[a]!)) fit += 1
+    if (len > 0 && sh.last.includes(word[b - 1]!)) fit += 1
+  }
+  return fit
 }
 
 /** Whether some seen content (of one length) is what `word` has from `at` (no substring made). */
