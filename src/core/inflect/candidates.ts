@@ -30,22 +30,8 @@ function suffixIndexOf(members: readonly string[]): SuffixIndex {
   return idx
 }
 
-/** What SuffixIndex.longestSharedCodes found for the lemma last asked about, per index (indexes are shared). */
-let suffixWord = ''
-const suffixFound = new Map<SuffixIndex, ReturnType<SuffixIndex['longestSharedCodes']>>()
-
-function sharedSuffix(idx: SuffixIndex, lemma: string, codes: readonly number[]) {
-  if (lemma !== suffixWord) {
-    suffixFound.clear()
-    suffixWord = lemma
-  }
-  let r = suffixFound.get(idx)
-  if (!r) {
-    r = idx.longestSharedCodes(codes, false)
-    suffixFound.set(idx, r)
-  }
-  return r
-}
+/** No member left out (a lemma that is not a training table): one map, only read. */
+const NONE_LEFT_OUT: ReadonlyMap<number, string> = new Map()
 
 /** Paradigms of one book, indexed for fast candidate search and analogy features. */
 export class CandidateFinder {
@@ -196,7 +182,7 @@ export class CandidateFinder {
       const leave = excluded === undefined ? false : excluded === lower ? true : codePoints(excluded)
       const sfx =
         leave === false
-          ? sharedSuffix(this.suffixes[i]!, lemma, codes)
+          ? this.suffixes[i]!.lastShared(lemma, codes)
           : this.suffixes[i]!.longestSharedCodes(codes, leave)
       const shared = this.sharedFeatures(v, i, sfx, stems, fit, excluded !== undefined)
       this.sideFeatures(i, lower, cls, shared)
@@ -243,9 +229,9 @@ export class CandidateFinder {
    * own paradigms, and its mirror image in their mirror partners (a twin's members are its original's,
    * mirrored), so no candidate draws on the example itself.
    */
-  private leftOut(lower: string, upos: string, own: number): Map<number, string> {
+  private leftOut(lower: string, upos: string, own: number): ReadonlyMap<number, string> {
+    if (own < 0) return NONE_LEFT_OUT
     const out = new Map<number, string>()
-    if (own < 0) return out
     out.set(own, lower)
     const partner = this.partner[own]
     const swap = this.alternations[upos]

@@ -63,7 +63,10 @@ export class SuffixIndex {
     word: string,
     exclude: boolean | string,
   ): { length: number; count: number; wholeMember: boolean } {
-    return this.longestSharedCodes(codePoints(word), typeof exclude === 'string' ? codePoints(exclude) : exclude)
+    return this.longestSharedCodes(
+      codePoints(word),
+      typeof exclude === 'string' ? codePoints(exclude) : exclude,
+    )
   }
 
   /**
@@ -121,6 +124,26 @@ export class SuffixIndex {
       if (ends - (onPath && d === out!.length - 1 ? 1 : 0) > 0 && i > 0) wholeMember = true
     }
     return { length, count, wholeMember }
+  }
+
+  /** The word lastShared last looked up, and what it found. */
+  private lastWord = ''
+  private lastFound: { length: number; count: number; wholeMember: boolean } | null = null
+
+  /**
+   * As longestSharedCodes(chars, false), remembering the last word: rules of cells that split the tables
+   * alike share an index, and a candidate search asks each cell about the same lemma in turn.
+   * @example idx.lastShared('aasfliege', codePoints('aasfliege')).length // 6
+   */
+  lastShared(
+    word: string,
+    chars: readonly number[],
+  ): { length: number; count: number; wholeMember: boolean } {
+    if (word !== this.lastWord || !this.lastFound) {
+      this.lastFound = this.longestSharedCodes(chars, false)
+      this.lastWord = word
+    }
+    return this.lastFound
   }
 
   /**
