@@ -37,17 +37,18 @@ export class SuffixIndex {
     this.start[reversed.length] = at
   }
 
-  /** Letter d of member k, or −1 past its end (so a member that ends sorts before its extensions). */
-  private letterAt(k: number, d: number): number {
-    const i = this.start[k]! + d
-    return i < this.start[k + 1]! ? this.text[i]! : -1
-  }
-
-  /** The first member in [lo, hi) whose letter d is at least c (members there share letters 0 … d − 1). */
+  /**
+   * The first member in [lo, hi) whose letter d is at least c (members there share letters 0 … d − 1); a
+   * member's letter past its end counts as −1, so a member that ends sorts before its extensions. The inner
+   * loop of every candidate search: it reads the arrays directly.
+   */
   private lowerBound(lo: number, hi: number, d: number, c: number): number {
+    const text = this.text
+    const start = this.start
     while (lo < hi) {
       const m = (lo + hi) >> 1
-      if (this.letterAt(m, d) < c) lo = m + 1
+      const at = start[m]! + d
+      if ((at < start[m + 1]! ? text[at]! : -1) < c) lo = m + 1
       else hi = m
     }
     return lo
@@ -86,30 +87,11 @@ export class SuffixIndex {
     let wholeMember = false
     // The excluded member shares the path while its letters from the end are the word's.
     let onPath = out !== null
-    const text = this.text
-    const start = this.start
     for (let i = chars.length - 1; i >= 0; i--) {
       const d = chars.length - 1 - i
       const c = chars[i]!
-      // lowerBound(lo, hi, d, c) and lowerBound(a, hi, d, c + 1), written out: this is the inner loop of
-      // every candidate search.
-      let x = lo
-      let y = hi
-      while (x < y) {
-        const m = (x + y) >> 1
-        const at = start[m]! + d
-        if ((at < start[m + 1]! ? text[at]! : -1) < c) x = m + 1
-        else y = m
-      }
-      const a = x
-      y = hi
-      while (x < y) {
-        const m = (x + y) >> 1
-        const at = start[m]! + d
-        if ((at < start[m + 1]! ? text[at]! : -1) <= c) x = m + 1
-        else y = m
-      }
-      const b = x
+      const a = this.lowerBound(lo, hi, d, c)
+      const b = this.lowerBound(a, hi, d, c + 1)
       if (a === b) break
       onPath = onPath && d < out!.length && out![out!.length - 1 - d] === c
       const n = b - a - (onPath ? 1 : 0)

@@ -138,7 +138,7 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
   }
 
   const entries: LexEntry[] = []
-  const cellKeys: Record<string, string[]> = {}
+  // Per UPOS, its cell keys in order of first appearance (sorted below).
   const keySets = new Map<string, Set<string>>()
   for (const { entry, rows } of merged.values()) {
     const infl = varying.get(entry.upos) ?? new Set<string>()
@@ -157,7 +157,6 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
     const keySig = `k\u0000${entry.upos}\u0000${[...inherentNames].join('|')}\u0000`
     const cells: Cell[] = []
     const index = new Map<string, Cell>()
-    const keys = (cellKeys[entry.upos] ??= [])
     let known = keySets.get(entry.upos)
     if (!known) {
       known = new Set()
@@ -173,10 +172,7 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
         cell = { key, forms: [] }
         index.set(key, cell)
         cells.push(cell)
-        if (!known.has(key)) {
-          known.add(key)
-          keys.push(key)
-        }
+        known.add(key)
       }
       if (!cell.forms.includes(r.form)) cell.forms.push(r.form)
     }
@@ -187,9 +183,10 @@ export function buildLexicon(input: Iterable<Entry>): Lexicon {
   entries.sort((a, b) => cmp(a.upos, b.upos) || cmp(a.lemma, b.lemma))
   // Each UPOS's cell keys are sorted once; a table's cells then sort by their key's place there (the same
   // order: compareFeatureKeys is total, and a table has each key once).
+  const cellKeys: Record<string, string[]> = {}
   const ranks = new Map<string, Map<string, number>>()
-  for (const upos of Object.keys(cellKeys)) {
-    cellKeys[upos]!.sort(compareFeatureKeys)
+  for (const [upos, known] of keySets) {
+    cellKeys[upos] = [...known].sort(compareFeatureKeys)
     ranks.set(upos, new Map(cellKeys[upos]!.map((k, i) => [k, i])))
   }
   for (const e of entries) {
